@@ -71,7 +71,9 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
     status = err.status;
     body = errorBody('bad_request', String(err.message ?? 'bad request'));
   }
-  if (status >= 500) (req as { log?: { error: (o: unknown, m: string) => void } }).log?.error({ err }, 'request failed');
+  const log = (req as { log?: { error: (o: unknown, m: string) => void; warn: (o: unknown, m: string) => void } }).log;
+  if (status === 503) log?.warn({ reason: (err as Error)?.message }, 'request refused: a service is unavailable');
+  else if (status >= 500) log?.error({ err }, 'request failed');
   if (!res.headersSent) res.status(status).json(body);
   else res.end();
 };
