@@ -6,7 +6,7 @@ import { expect } from 'chai';
 import request from 'supertest';
 import { DEMO_ACCOUNTS } from '../../auth-fake/demo-accounts.ts';
 import { safeReturnTo } from '../../api/src/auth/auth.routes.ts';
-import { signIn, CookieJar } from '../support/sign-in.ts';
+import { signIn, CookieJar, readJson } from '../support/sign-in.ts';
 import { apiUrl, testDb } from '../support/stack.ts';
 
 function expectErrorShape(body: unknown, code: string) {
@@ -38,7 +38,7 @@ describe('sign-in with OpenID Connect (real auth-fake, real sessions)', () => {
       const session = await signIn(apiUrl(), account.login);
       const res = await session.api('/api/v1/me');
       expect(res.status).to.equal(200);
-      const me = await res.json();
+      const me = await readJson(res);
       expect(me.user.name).to.equal(account.name);
       expect(me.user.email).to.equal(account.email);
       expect(me.roles).to.deep.equal([...account.roles].sort());
@@ -80,7 +80,7 @@ describe('sign-in with OpenID Connect (real auth-fake, real sessions)', () => {
     const session = await signIn(apiUrl(), 'quality');
     const out = await session.api('/auth/logout', { method: 'POST', json: {} });
     expect(out.status).to.equal(200);
-    const { redirectTo } = await out.json();
+    const { redirectTo } = await readJson(out);
     expect(redirectTo).to.match(/\/session\/end\?/);
     expect(new URL(redirectTo).searchParams.get('id_token_hint')).to.be.a('string');
     const after = await session.api('/api/v1/me');
@@ -91,7 +91,7 @@ describe('sign-in with OpenID Connect (real auth-fake, real sessions)', () => {
     const session = await signIn(apiUrl(), 'quality');
     const noToken = await fetch(`${apiUrl()}/auth/logout`, { method: 'POST', headers: { cookie: session.cookie } });
     expect(noToken.status).to.equal(403);
-    expectErrorShape(await noToken.json(), 'csrf');
+    expectErrorShape(await readJson(noToken), 'csrf');
     const wrongToken = await fetch(`${apiUrl()}/api/v1/me`, { method: 'POST', headers: { cookie: session.cookie, 'x-xsrf-token': 'forged' } });
     expect(wrongToken.status).to.equal(403);
     expect((await session.api('/api/v1/me')).status, 'the session survives the refused request').to.equal(200);
@@ -111,7 +111,7 @@ describe('role guard', () => {
     for (const login of ['viewer', 'designer', 'materials', 'analyst']) {
       const res = await (await signIn(apiUrl(), login)).api('/api/v1/audit-log');
       expect(res.status, login).to.equal(403);
-      const body = await res.json();
+      const body = await readJson(res);
       expectErrorShape(body, 'forbidden');
       expect(body.error.message).to.match(/quality or admin/);
     }
@@ -121,7 +121,7 @@ describe('role guard', () => {
     for (const login of ['quality', 'admin']) {
       const res = await (await signIn(apiUrl(), login)).api('/api/v1/audit-log?limit=5');
       expect(res.status, login).to.equal(200);
-      const body = await res.json();
+      const body = await readJson(res);
       expect(body.entries).to.be.an('array').that.is.not.empty;
       expect(body.entries[0]).to.include.keys('at', 'actor', 'action');
     }
@@ -130,7 +130,7 @@ describe('role guard', () => {
   it('validates query parameters with a message naming the field', async () => {
     const res = await (await signIn(apiUrl(), 'quality')).api('/api/v1/audit-log?limit=0');
     expect(res.status).to.equal(400);
-    expect((await res.json()).error.message).to.match(/limit/);
+    expect((await readJson(res)).error.message).to.match(/limit/);
   });
 });
 
@@ -141,7 +141,7 @@ describe('the API surface', () => {
     const session = await signIn(apiUrl(), 'viewer');
     const signedIn = await session.api('/api/v1/no-such-thing');
     expect(signedIn.status).to.equal(404);
-    expectErrorShape(await signedIn.json(), 'not_found');
+    expectErrorShape(await readJson(signedIn), 'not_found');
   });
 
   it('sets security headers (helmet) with a same-origin content security policy', async () => {

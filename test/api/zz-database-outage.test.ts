@@ -5,12 +5,12 @@
  */
 import { expect } from 'chai';
 import { startCluster, stopCluster } from '../../database/local-server.ts';
-import { signIn } from '../support/sign-in.ts';
+import { readJson, signIn } from '../support/sign-in.ts';
 import { apiUrl, stack } from '../support/stack.ts';
 
 async function health() {
   const res = await fetch(`${apiUrl()}/api/v1/health`);
-  return { status: res.status, body: await res.json() };
+  return { status: res.status, body: await readJson(res) };
 }
 
 async function waitFor<T>(probe: () => Promise<T>, ok: (value: T) => boolean, timeoutMs: number): Promise<T> {
@@ -41,7 +41,7 @@ describe('database outage and recovery', function () {
 
       const me = await session.api('/api/v1/me');
       expect(me.status, 'a session lookup cannot be made').to.equal(503);
-      const body = await me.json();
+      const body = await readJson(me);
       expect(body.error.code).to.equal('database_unavailable');
       expect(JSON.stringify(body)).not.to.match(/ECONNREFUSED|at .*\.ts:\d+/);
     } finally {

@@ -76,3 +76,9 @@ export async function signIn(apiUrl: string, login: string, password = DEMO_PASS
   };
   return { jar, cookie: jar.header(), csrf: decodeURIComponent(csrf), api };
 }
+
+/** The JSON body of a fetch response, loosely typed for assertions. */
+// eslint-disable-next-line @typescript-eslint/no-explicit-any
+export async function readJson(response: Response): Promise<any> {
+  return response.json();
+}

@@ -2,13 +2,27 @@
  * npm start: the local Plyledger on this machine, ready to sign in to.
  * Ctrl-C stops everything it started.
  */
+import { spawn, type ChildProcess } from 'node:child_process';
+import path from 'node:path';
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../../../auth-fake/demo-accounts.ts';
-import { startLocalStack } from './stack.ts';
+import { repoRoot, startLocalStack } from './stack.ts';
 
 const say = (line: string) => console.log(`[plyledger] ${line}`);
+/** npm run dev: the Angular dev server on 4200 with live reload, proxying /api and /auth to the API. */
+const dev = process.argv.includes('--dev');
+const DEV_SERVER_PORT = 4200;
+if (dev) process.env.PLYLEDGER_APP_URL ??= `http://127.0.0.1:${DEV_SERVER_PORT}`;
 
 try {
-  const stack = await startLocalStack('dev', say);
+  const stack = await startLocalStack('dev', say, { buildClient: !dev });
+  let devServer: ChildProcess | undefined;
+  if (dev) {
+    devServer = spawn(
+      process.execPath,
+      [path.join(repoRoot, 'node_modules/@angular/cli/bin/ng.js'), 'serve', '--host', '127.0.0.1', '--port', String(DEV_SERVER_PORT), '--proxy-config', 'client/proxy.conf.json'],
+      { cwd: repoRoot, stdio: 'inherit', env: { ...process.env, NG_CLI_ANALYTICS: 'false' } },
+    );
+  }
   const width = Math.max(...DEMO_ACCOUNTS.map((a) => a.login.length));
   console.log(`
   Plyledger is running:       ${stack.config.appUrl}
@@ -25,6 +39,7 @@ ${DEMO_ACCOUNTS.map((a) => `    ${a.login.padEnd(width)}  ${a.name.padEnd(16)} $
     if (stopping) return;
     stopping = true;
     say('stopping…');
+    devServer?.kill('SIGTERM');
     await stack.stop();
     say('stopped');
     process.exit(0);

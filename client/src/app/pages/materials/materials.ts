@@ -1,0 +1,12 @@
+import { ChangeDetectionStrategy, Component } from '@angular/core';
+
+import { PagePlaceholder } from '../../shared/page-placeholder/page-placeholder';
+
+/** Placeholder page; the real one comes with a later issue. */
+@Component({
+  selector: 'app-materials',
+  imports: [PagePlaceholder],
+  templateUrl: './materials.html',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class MaterialsPage {}
