@@ -82,7 +82,10 @@ export function clusterFor(profile: Profile, env: NodeJS.ProcessEnv = process.en
     const tag = Buffer.from(here).toString('base64url').slice(-24);
     base = path.join(os.tmpdir(), `plyledger-pg-${tag}`);
   }
-  const home = path.join(base, profile);
+  // PLYLEDGER_CLUSTER_NAME lets a second stack of one profile run beside the first (other ports, other folder).
+  const name = env.PLYLEDGER_CLUSTER_NAME ?? profile;
+  if (!/^[a-z0-9-]+$/.test(name)) throw new Error(`PLYLEDGER_CLUSTER_NAME must be lower-case letters, digits and -, got '${name}'`);
+  const home = path.join(base, name);
   return {
     profile,
     port: database.port,

@@ -45,7 +45,7 @@ export function createApp(deps: AppDeps) {
   app.use(
     pinoHttp({
       logger: deps.logger,
-      autoLogging: { ignore: (req) => req.url === '/api/v1/health' },
+      autoLogging: { ignore: (req) => req.url === '/api/v1/health' || !/^\/(api|auth)\//.test(req.url ?? '') },
       // One short line per request: no headers (cookies must not reach the log).
       serializers: {
         req: (req) => ({ id: req.id, method: req.method, url: req.url }),
