@@ -4,6 +4,7 @@
  * down; every /api/v1 route after them needs a session, and every
  * state-changing one a CSRF token.
  */
+import compression from 'compression';
 import express, { Router } from 'express';
 import { rateLimit } from 'express-rate-limit';
 import helmet from 'helmet';
@@ -53,6 +54,8 @@ export function createApp(deps: AppDeps) {
       },
     }),
   );
+  // gzip for the client's bundles and the API's JSON (matrices and analyses compress well).
+  app.use(compression());
   const issuerOrigin = new URL(config.oidc.issuer).origin;
   app.use(
     helmet({

@@ -162,3 +162,10 @@ describe('the API surface', () => {
     expect(res.body.components.schemas.Error).to.exist;
   });
 });
+
+describe('transfer', () => {
+  it('compresses the client bundle and API replies (gzip)', async () => {
+    const res = await request(apiUrl()).get('/api/v1/openapi.json').set('Accept-Encoding', 'gzip');
+    expect(res.headers['content-encoding']).to.equal('gzip');
+  });
+});
