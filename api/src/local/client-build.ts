@@ -30,16 +30,18 @@ export async function buildClientIfStale(root: string, distDir: string, log: (li
   log('building the client (npm run build)…');
   const started = Date.now();
   await new Promise<void>((resolve, reject) => {
-    const child = spawn(process.execPath, [path.join(root, 'node_modules/@angular/cli/bin/ng.js'), 'build'], {
+    // The builder writes <output>/browser; a dist folder other than the default builds there instead.
+    const output = path.basename(distDir) === 'browser' ? path.dirname(distDir) : distDir;
+    const child = spawn(process.execPath, [path.join(root, 'node_modules/@angular/cli/bin/ng.js'), 'build', '--output-path', output], {
       cwd: root,
       stdio: ['ignore', 'pipe', 'pipe'],
       env: { ...process.env, NG_CLI_ANALYTICS: 'false', NG_FORCE_TTY: 'false' },
     });
-    let output = '';
-    child.stdout.on('data', (d) => (output += d));
-    child.stderr.on('data', (d) => (output += d));
+    let transcript = '';
+    child.stdout.on('data', (d) => (transcript += d));
+    child.stderr.on('data', (d) => (transcript += d));
     child.on('error', reject);
-    child.on('exit', (code) => (code === 0 ? resolve() : reject(new Error(`client build failed (exit ${code}):\n${output.slice(-4000)}`))));
+    child.on('exit', (code) => (code === 0 ? resolve() : reject(new Error(`client build failed (exit ${code}):\n${transcript.slice(-4000)}`))));
   });
   log(`client built in ${((Date.now() - started) / 1000).toFixed(0)} s`);
   return true;
