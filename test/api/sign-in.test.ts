@@ -7,7 +7,7 @@ import request from 'supertest';
 import { DEMO_ACCOUNTS } from '../../auth-fake/demo-accounts.ts';
 import { safeReturnTo } from '../../api/src/auth/auth.routes.ts';
 import { signIn, CookieJar, readJson } from '../support/sign-in.ts';
-import { apiUrl, testDb } from '../support/stack.ts';
+import { apiUrl, stack, testDb } from '../support/stack.ts';
 
 function expectErrorShape(body: unknown, code: string) {
   expect(body).to.have.nested.property('error.code', code);
@@ -26,7 +26,7 @@ describe('sign-in with OpenID Connect (real auth-fake, real sessions)', () => {
     const res = await request(apiUrl()).get('/auth/login');
     expect(res.status).to.equal(302);
     const location = new URL(res.headers.location);
-    expect(location.origin).to.equal(new URL(process.env.PLYLEDGER_OIDC_ISSUER ?? 'http://127.0.0.1:4411').origin);
+    expect(location.origin).to.equal(new URL(stack().config.oidc.issuer).origin);
     expect(location.searchParams.get('code_challenge_method')).to.equal('S256');
     expect(location.searchParams.get('code_challenge')).to.match(/^[\w-]{43}$/);
     expect(location.searchParams.get('state')).to.be.a('string').and.not.empty;
