@@ -12,6 +12,10 @@ import type { Knex } from 'knex';
 import type pg from 'pg';
 import { pinoHttp } from 'pino-http';
 import type { Logger } from 'pino';
+import { allowablesOpenApi } from './allowables/allowables.openapi.ts';
+import { allowablesRouter } from './allowables/allowables.routes.ts';
+import { analysesOpenApi } from './analyses/analyses.openapi.ts';
+import { analysesRouter } from './analyses/analyses.routes.ts';
 import { auditOpenApi, auditRouter } from './audit/audit.routes.ts';
 import { authOpenApi, authRouter } from './auth/auth.routes.ts';
 import { csrfProtection } from './auth/csrf.ts';
@@ -19,11 +23,23 @@ import type { OidcClient } from './auth/oidc-client.ts';
 import { requireSession } from './auth/require-role.ts';
 import { sessionMiddleware } from './auth/session.ts';
 import { calculationOpenApi, calculationRouters } from './calculations/index.ts';
+import { couponsOpenApi } from './coupons/coupons.openapi.ts';
+import { couponsRouter } from './coupons/coupons.routes.ts';
 import type { Config } from './config.ts';
 import { healthOpenApi, healthRouter } from './health/health.routes.ts';
+import { exportsOpenApi } from './exports/exports.openapi.ts';
+import { exportsRouter } from './exports/exports.routes.ts';
 import { errorHandler, notFoundHandler } from './http/errors.ts';
 import { buildOpenApiDocument } from './http/openapi.ts';
 import './http/request-user.ts';
+import { layupsOpenApi } from './layups/layups.openapi.ts';
+import { layupsRouter } from './layups/layups.routes.ts';
+import { mailOpenApi, mailRouter } from './mail/mail.routes.ts';
+import { createMailer } from './mail/mail.transport.ts';
+import { startOutboxRetry } from './mail/outbox.service.ts';
+import { materialsOpenApi } from './materials/materials.openapi.ts';
+import { materialsRouter } from './materials/materials.routes.ts';
+import { plyPropertiesOpenApi, plyPropertiesRouter } from './ply-properties/ply-properties.routes.ts';
 import { staticClient } from './http/static-client.ts';
 import { usersOpenApi, usersRouter } from './users/users.routes.ts';
 import { PRODUCT_VERSION } from './version.ts';
@@ -76,7 +92,7 @@ export function createApp(deps: AppDeps) {
     }),
   );
 
-  const openApi = buildOpenApiDocument(PRODUCT_VERSION, [healthOpenApi, authOpenApi, usersOpenApi, auditOpenApi, ...calculationOpenApi]);
+  const openApi = buildOpenApiDocument(PRODUCT_VERSION, [healthOpenApi, authOpenApi, usersOpenApi, auditOpenApi, ...calculationOpenApi, materialsOpenApi, couponsOpenApi, analysesOpenApi, allowablesOpenApi, plyPropertiesOpenApi, mailOpenApi, layupsOpenApi, exportsOpenApi]);
   const publicApi = Router();
   publicApi.use(healthRouter(db, PRODUCT_VERSION));
   publicApi.get('/openapi.json', (_req, res) => {
@@ -106,6 +122,16 @@ export function createApp(deps: AppDeps) {
   api.use(usersRouter(db));
   api.use(auditRouter(db));
   for (const router of calculationRouters) api.use(router);
+  api.use(materialsRouter(db));
+  api.use(couponsRouter(db));
+  api.use(analysesRouter(db));
+  const mailer = createMailer(config);
+  startOutboxRetry(db, mailer);
+  api.use(allowablesRouter(db, mailer));
+  api.use(plyPropertiesRouter(db));
+  api.use(mailRouter(db, mailer));
+  api.use(layupsRouter(db));
+  api.use(exportsRouter(db));
   app.use('/api/v1', api);
   app.use(['/api', '/auth'], notFoundHandler);
 

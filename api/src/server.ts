@@ -3,11 +3,13 @@
  *   tsx api/src/server.ts          (npm start runs the whole local stack)
  */
 import type { Server } from 'node:http';
+import os from 'node:os';
 import { pathToFileURL } from 'node:url';
 import pg from 'pg';
 import { pino } from 'pino';
 import { createApp } from './app.ts';
 import { createOidcClient } from './auth/oidc-client.ts';
+import { setEngineThreads } from './calculations/engine-runner.ts';
 import { loadConfig, type Config } from './config.ts';
 import { createDb } from './db.ts';
 
@@ -19,6 +21,8 @@ export interface RunningApi {
 
 export async function startApi(config: Config = loadConfig()): Promise<RunningApi> {
   const logger = pino({ level: config.logLevel, base: { service: 'plyledger-api' } });
+  // Engine work in worker threads (PLYLEDGER_ENGINE_THREADS=0 keeps it inline).
+  setEngineThreads(Number(process.env.PLYLEDGER_ENGINE_THREADS ?? Math.max(1, os.availableParallelism() - 1)));
   const db = createDb(config);
   const pool = new pg.Pool({ ...config.database, max: 5, connectionTimeoutMillis: 3000, idleTimeoutMillis: 10000 });
   // An idle connection cut by a database restart must not crash the process.

@@ -5,6 +5,9 @@
  */
 import type { Router } from 'express';
 import type { OpenApiFragment } from '../http/openapi-types.ts';
+import { laminateOpenApi, laminateRouter } from './laminate.routes.ts';
+import { sectionsOpenApi, sectionsRouter } from './sections.routes.ts';
+import { statisticsOpenApi, statisticsRouter } from './statistics.routes.ts';
 
-export const calculationRouters: Router[] = [];
-export const calculationOpenApi: OpenApiFragment[] = [];
+export const calculationRouters: Router[] = [statisticsRouter, laminateRouter, sectionsRouter];
+export const calculationOpenApi: OpenApiFragment[] = [statisticsOpenApi, laminateOpenApi, sectionsOpenApi];

@@ -27,6 +27,8 @@ export interface PlyMaterial {
   Yt?: number;
   Yc?: number;
   S12?: number;
+  /** transverse (2-3) shear strength, MPa; only Hashin's matrix-compression mode reads it (default Yc / 2) */
+  S23?: number;
   /** strain allowables, positive magnitudes; g12 is engineering shear strain */
   e1t?: number;
   e1c?: number;
@@ -48,7 +50,7 @@ export type Matrix2 = [[number, number], [number, number]];
 export type Matrix6 = number[][];
 
 /** Section stiffness of a laminate, what a shell element needs. */
-export interface LaminateStiffness {
+export interface LaminateStiffness extends LaminateStiffnessExtras {
   /** N/mm */
   A: Matrix3;
   /** N */
@@ -65,4 +67,22 @@ export interface LaminateStiffness {
   thickness: number;
   /** kg/m² */
   arealMass: number;
+}
+
+/** What the transverse shear stiffness H rests on (stated in every output). */
+export interface TransverseShearDescription {
+  model: 'correction-factor' | 'parabolic';
+  /** k of the correction-factor model (5/6 by default); null for 'parabolic' */
+  correctionFactor: number | null;
+  description: string;
+  /** defaults taken for missing G13 / G23 */
+  assumed: string[];
+}
+
+/** Fields laminateStiffness adds to LaminateStiffness (optional so other producers need not set them). */
+export interface LaminateStiffnessExtras {
+  plyCount?: number;
+  /** 0-based indices of plies without density: they count as 0 in arealMass */
+  pliesWithoutDensity?: number[];
+  transverseShear?: TransverseShearDescription;
 }

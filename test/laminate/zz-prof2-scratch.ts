@@ -1,0 +1,11 @@
+import { parseLaminateInput, CRITERIA } from '../../api/src/laminate/index.ts';
+import { buildPlyTable } from '../../api/src/laminate/ply-table.ts';
+import { sectionStiffnessOf } from '../../api/src/laminate/stiffness.ts';
+import { emptyStackResponse, stackResponse } from '../../api/src/laminate/stack-response.ts';
+import { evaluateCriteria } from '../../api/src/laminate/failure/ply-failure.ts';
+import { PlanCache } from '../../api/src/laminate/failure/plans.ts';
+const material = { E1: 135000, E2: 9500, G12: 5200, nu12: 0.31, Xt: 2100, Xc: 1350, Yt: 62, Yc: 210, S12: 92, alpha1: -0.3e-6, alpha2: 28e-6, density: 1570 };
+const input = parseLaminateInput({ code: `[45/0/-45/90]8s`, material, plyThickness: 0.125, loads: { N: [300, 100, 20], M: [5, 0, 0], deltaT: -120 }, criteria: [...CRITERIA] });
+const table = buildPlyTable(input.plies); const section = sectionStiffnessOf(table); const response = emptyStackResponse(64); stackResponse(table, section, input.loads!, response);
+const plans = new PlanCache(input.failure);
+for (let i = 0; i < 20000; i++) evaluateCriteria(table, response, ['tsai-wu'], plans);
