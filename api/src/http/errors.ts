@@ -1,4 +1,5 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
+import { isDatabaseUnavailable } from '../shared/database-errors.ts';
 import { InputError } from '../shared/input-error.ts';
 
 /**
@@ -28,14 +29,6 @@ export const badRequest = (message: string, details: unknown = null) => new ApiE
 
 export function errorBody(code: string, message: string, details: unknown = null) {
   return { error: { code, message, details } };
-}
-
-/** PostgreSQL / network failures that mean "the database is not there right now". */
-function isDatabaseUnavailable(err: unknown): boolean {
-  const e = err as { code?: string; message?: string; name?: string };
-  if (!e) return false;
-  if (['ECONNREFUSED', 'ECONNRESET', 'ETIMEDOUT', 'EPIPE', '57P01', '57P02', '57P03', '08000', '08001', '08003', '08006'].includes(e.code ?? '')) return true;
-  return /Connection terminated|Timeout acquiring a connection|connect ECONNREFUSED|the database system is (starting up|shutting down)/i.test(e.message ?? '') || e.name === 'KnexTimeoutError';
 }
 
 export const notFoundHandler: RequestHandler = (req, _res, next) => {
