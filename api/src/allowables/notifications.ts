@@ -8,7 +8,7 @@ import { allowablePath, decisionMessage, proposalMessage, type AllowableNotice }
 import { reviewPath } from '../mail/messages.ts';
 import type { Mailer } from '../mail/mail.transport.ts';
 import { queueMail } from '../mail/outbox.service.ts';
-import { userEmail, usersWithRole } from '../mail/recipients.queries.ts';
+import { contactOf as userEmail, usersWithRole } from '../users/users.service.ts';
 import type { AllowableRow } from './allowables.queries.ts';
 import type { AllowableLabels } from './allowables.wire.ts';
 

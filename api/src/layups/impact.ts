@@ -7,7 +7,7 @@
  * withdrawn is asked of the catalogue at read time.
  */
 import type { Knex } from 'knex';
-import { selectAllowableStates } from './allowable-states.queries.ts';
+import { allowableStates } from '../allowables/allowables.service.ts';
 import type { ResolvedLamina } from './lamina-sources.ts';
 
 export interface Usage {
@@ -34,7 +34,7 @@ const STRAIN_FIELDS = new Set(['e1t', 'e1c', 'e2t', 'e2c', 'g12']);
 
 /** The impact entries of several records at once (one catalogue question for all). */
 export async function impactOfMany<K>(db: Knex, records: Array<{ key: K; usage: Usage[]; laminae: readonly ResolvedLamina[] }>): Promise<Map<K, ImpactEntry[]>> {
-  const states = await selectAllowableStates(db, records.flatMap((r) => r.usage.map((u) => u.allowableId)));
+  const states = await allowableStates(db, records.flatMap((r) => r.usage.map((u) => u.allowableId)));
   const result = new Map<K, ImpactEntry[]>();
   for (const record of records) {
     const byAllowable = new Map<number, ImpactEntry>();
@@ -68,5 +68,5 @@ export async function impactOf(db: Knex, usage: Usage[], laminae: readonly Resol
 
 /** Status and successor of one allowable, for its impact page; null when it does not exist. */
 export async function allowableState(db: Knex, allowableId: number) {
-  return (await selectAllowableStates(db, [allowableId])).get(allowableId) ?? null;
+  return (await allowableStates(db, [allowableId])).get(allowableId) ?? null;
 }

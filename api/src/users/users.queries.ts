@@ -35,3 +35,14 @@ export async function rolesOf(db: Knex, userId: number): Promise<string[]> {
 export async function findUser(db: Knex, id: number): Promise<UserRow | undefined> {
   return db<UserRow>('users').where({ id }).first();
 }
+
+/** People holding a role who have an e-mail address (the recipients of notifications). */
+export async function usersWithRole(db: Knex, role: string): Promise<Array<{ id: number; name: string; email: string }>> {
+  const rows = await db('users as u')
+    .join('user_roles as r', 'r.user_id', 'u.id')
+    .where('r.role_code', role)
+    .whereNotNull('u.email')
+    .orderBy('u.id')
+    .distinct('u.id', 'u.name', 'u.email');
+  return rows.map((r: { id: string; name: string; email: string }) => ({ id: Number(r.id), name: r.name, email: r.email }));
+}

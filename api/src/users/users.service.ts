@@ -6,7 +6,9 @@
 import type { Knex } from 'knex';
 import type { SessionUser } from '../http/request-user.ts';
 import { isRoleCode, type RoleCode } from './roles.ts';
-import { findUser, replaceProviderRoles, rolesOf, upsertUser } from './users.queries.ts';
+import { findUser, replaceProviderRoles, rolesOf, upsertUser, usersWithRole } from './users.queries.ts';
+
+export { usersWithRole };
 
 export interface IdentityClaims {
   issuer: string;
@@ -41,4 +43,10 @@ export async function describeUser(db: Knex, user: SessionUser) {
     user: { id: user.id, subject: row?.subject ?? '', name: row?.name ?? user.name, email: row?.email ?? user.email },
     roles: user.roles,
   };
+}
+
+/** Name and e-mail address of one user, for a notification. */
+export async function contactOf(db: Knex, id: number): Promise<{ id: number; name: string; email: string | null } | undefined> {
+  const row = await findUser(db, id);
+  return row ? { id: Number(row.id), name: row.name, email: row.email } : undefined;
 }
