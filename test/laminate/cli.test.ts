@@ -17,7 +17,8 @@ const input = {
   criteria: ['max-stress', 'max-strain', 'tsai-hill', 'tsai-wu', 'hashin', 'puck'], factorOfSafety: 1.5,
 };
 
-describe('laminate engine: CLI commands', () => {
+describe('laminate engine: CLI commands', function () {
+  this.timeout(30000); // bulk checks; generous for a loaded CI machine, they take well under a second alone
   let dir = '';
   before(async () => { dir = await mkdtemp(join(tmpdir(), 'plyledger-laminate-')); });
   after(async () => { await rm(dir, { recursive: true, force: true }); });

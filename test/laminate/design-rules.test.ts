@@ -6,7 +6,8 @@ const stack = (code: string): PlyInput[] => parseStackingCode(code).map((thetaDe
 const byRule = (checks: RuleCheck[]) => Object.fromEntries(checks.map((c) => [c.rule, c]));
 
 // the rules are common practice (ENGINEERING.md section 3 item 7); the verdicts follow from their wording
-describe('laminate engine: design rules', () => {
+describe('laminate engine: design rules', function () {
+  this.timeout(30000); // bulk checks; generous for a loaded CI machine, they take well under a second alone
   it('a ±45-skinned quasi-isotropic symmetric laminate passes every rule', () => {
     const r = byRule(designRuleChecks(stack('[45/0/-45/90]s')));
     for (const rule of Object.values(r)) expect(rule.pass, rule.rule).to.equal(true);

@@ -2,7 +2,8 @@ import { expect } from 'chai';
 import { analyseLaminate, failureEnvelope, parseEnvelopeInput, parseLaminateInput, parseStackingCode, polarStiffness } from '../../api/src/laminate/index.ts';
 import { DEMO_CARBON, T300_5208 } from './support/generators.ts';
 
-describe('laminate engine: failure envelopes', () => {
+describe('laminate engine: failure envelopes', function () {
+  this.timeout(30000); // bulk checks; generous for a loaded CI machine, they take well under a second alone
   it('each envelope point is a first-ply failure load: analysing the laminate there gives strength ratio 1 (residual held fixed)', () => {
     for (const axes of ['Nx-Ny', 'Nx-Nxy'] as const) {
       for (const criterion of ['tsai-wu', 'max-stress', 'puck'] as const) {

@@ -17,7 +17,8 @@ function uniaxial(criterion: CriterionName, m: PlyMaterial, direction: number[])
   return ratio(criterion, m, [0, 0, 0], direction).ratio;
 }
 
-describe('laminate engine: failure criteria of one ply', () => {
+describe('laminate engine: failure criteria of one ply', function () {
+  this.timeout(30000); // bulk checks; generous for a loaded CI machine, they take well under a second alone
   for (const criterion of CRITERIA) {
     it(`${criterion}: a unidirectional ply fails at Xt, Xc, Yt, Yc and S12 under the matching uniaxial stress (definition of the strengths)`, () => {
       for (const m of [T300_5208, DEMO_CARBON]) {
@@ -162,6 +163,17 @@ describe('laminate engine: failure criteria of one ply', () => {
     const withS23 = ratio('hashin', { ...DEMO_CARBON, S23: 70 }, [0, 0, 0], [0, -1, 0.5]).ratio;
     expect(withS23).to.not.be.closeTo(base, 1e-3);
     expect(ratio('hashin', { ...DEMO_CARBON, S23: 70 }, [0, 0, 0], [0, 1, 0.5]).ratio).to.equal(ratio('hashin', DEMO_CARBON, [0, 0, 0], [0, 1, 0.5]).ratio);
+  });
+
+  it('Hashin: where σ1 turns tensile under shear above S12 the index jumps past 1, and the ply fails at that point (Hashin 1980)', () => {
+    // S23 = 40 MPa makes matrix compression lenient under σ2 = -30 MPa; σ1 = -10 + R, τ12 = 10 R: fibre compression
+    // holds until R = 10, where fibre tension with (τ/S12)² = (100/92)² > 1 takes over (hand calculation)
+    const m = { ...DEMO_CARBON, S23: 40 };
+    const r = ratio('hashin', m, [-10, -30, 0], [1, 0, 10]);
+    expect(r.ratio).to.be.closeTo(10, 1e-12);
+    expect(criterionPlan('hashin', m, DEFAULT_FAILURE_OPTIONS).modes[r.modeIndex].mode).to.equal('fibre-tension');
+    expect(INDEPENDENT_INDEX.hashin(m, -10 + 9.999, -30, 99.99)).to.be.below(1);
+    expect(INDEPENDENT_INDEX.hashin(m, -10 + 10.001, -30, 100.01)).to.be.above(1);
   });
 
   it('residual stress alone beyond the surface gives strength ratio 0; a load that never fails gives none', () => {

@@ -22,7 +22,8 @@ function expectAllFinite(value: unknown, path = 'reply'): void {
   else if (value && typeof value === 'object') for (const [k, v] of Object.entries(value)) expectAllFinite(v, `${path}.${k}`);
 }
 
-describe('laminate engine: bad input', () => {
+describe('laminate engine: bad input', function () {
+  this.timeout(30000); // bulk checks; generous for a loaded CI machine, they take well under a second alone
   it('names the ply and field of a missing or non-positive modulus or thickness', () => {
     const p = problemsOf(() => parseLaminateInput({ plies: [ply(), ply({}, { E2: undefined }), ply({ thickness: 0 }), ply({}, { G12: -5 })] }));
     const fields = p.map((x) => x.field);
@@ -98,6 +99,20 @@ describe('laminate engine: bad input', () => {
     expect(problemsOf(() => parseEnvelopeInput({ ...base, points: 2.5 }))[0].field).to.equal('points');
     expect(problemsOf(() => parseEnvelopeInput({ ...base, material: { ...DEMO_CARBON, Xt: undefined } }))[0].field).to.equal('material.Xt');
     expect(problemsOf(() => parsePolarInput({ ...base, stepDeg: 0 }))[0].field).to.equal('stepDeg');
+  });
+
+  it('refuses values outside plausibility bounds that could overflow (moduli, thickness, strengths, loads)', () => {
+    expect(problemsOf(() => parseLaminateInput({ plies: [ply({}, { E1: 1e300 })] }))[0].field).to.equal('plies[0].material.E1');
+    expect(problemsOf(() => parseLaminateInput({ plies: [ply({ thickness: 1e-9 })] }))[0].field).to.equal('plies[0].thickness');
+    expect(problemsOf(() => parseLaminateInput({ plies: [ply({}, { Yt: 1e-12 })] }))[0].field).to.equal('plies[0].material.Yt');
+    expect(problemsOf(() => parseLaminateInput({ plies: [ply()], loads: { N: [1e300, 0, 0] } }))[0].field).to.equal('loads.N');
+    expect(problemsOf(() => parseLaminateInput({ plies: [ply()], loads: { deltaT: 1e6 } }))[0].field).to.equal('loads.deltaT');
+  });
+
+  it('keeps every number finite at the edges of the bounds', () => {
+    const soft = { E1: 1e-3, E2: 1e-3, G12: 1e-3, nu12: 0.3, Xt: 1e-6, Xc: 1e-6, Yt: 1e-6, Yc: 1e-6, S12: 1e-6, alpha1: 1, alpha2: -1 };
+    const a = analyseLaminate(parseLaminateInput({ plies: [{ material: soft, thetaDeg: 30, thickness: 1e-6 }, { material: soft, thetaDeg: -60, thickness: 1e-6 }], loads: { N: [1e9, -1e9, 1e9], M: [1e9, 1e9, -1e9], deltaT: 1e4 }, criteria: ['max-stress', 'max-strain', 'tsai-hill', 'tsai-wu', 'hashin', 'puck'] }));
+    expectAllFinite(a);
   });
 
   it('never puts NaN or Infinity in a reply (zero loads, loads that never fail a ply, prescribed strains, 100 random stacks)', () => {

@@ -2,7 +2,8 @@ import { expect } from 'chai';
 import { analyseLaminate, CRITERIA, parseLaminateInput, type PlyInput } from '../../api/src/laminate/index.ts';
 import { DEMO_CARBON, randomAngle, randomMaterial, seededRandom, T300_5208 } from './support/generators.ts';
 
-describe('laminate engine: first-ply and progressive failure', () => {
+describe('laminate engine: first-ply and progressive failure', function () {
+  this.timeout(30000); // bulk checks; generous for a loaded CI machine, they take well under a second alone
   it('loads times the first-ply strength ratio put the critical ply on index 1 and no ply above it (every criterion; 60 stacks with ΔT)', () => {
     const rnd = seededRandom(701);
     for (let k = 0; k < 60; k++) {

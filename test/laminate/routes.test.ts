@@ -9,7 +9,8 @@ import { DEMO_CARBON } from './support/generators.ts';
 const app = express().use(express.json({ limit: '5mb' })).use(laminateRouter).use(errorHandler);
 const body = { code: '[0/±45/90]s', material: DEMO_CARBON, plyThickness: 0.125, loads: { N: [100, 0, 0] }, criteria: ['tsai-wu'] };
 
-describe('laminate routes', () => {
+describe('laminate routes', function () {
+  this.timeout(30000); // bulk checks; generous for a loaded CI machine, they take well under a second alone
   it('POST /laminates/analyze returns what the engine returns', async () => {
     const res = await request(app).post('/laminates/analyze').send(body).expect(200);
     expect(res.body).to.deep.equal(JSON.parse(JSON.stringify(analyseLaminate(parseLaminateInput(body)))));

@@ -14,7 +14,8 @@ function parseError(code: string): string {
   throw new Error(`${code} parsed`);
 }
 
-describe('laminate engine: stacking code', () => {
+describe('laminate engine: stacking code', function () {
+  this.timeout(30000); // bulk checks; generous for a loaded CI machine, they take well under a second alone
   // expansions by the notation's definition (ENGINEERING.md section 3 item 7; common practice)
   const cases: [string, number[]][] = [
     ['[0/±45/90]2s', [0, 45, -45, 90, 0, 45, -45, 90, 90, -45, 45, 0, 90, -45, 45, 0]],

@@ -9,7 +9,8 @@ import {
 const printed = (value: number, digits: number) => Number(value.toPrecision(digits));
 const stackOf = (code: string, t = 0.125, material = T300_5208): PlyInput[] => parseStackingCode(code).map((thetaDeg) => ({ material, thetaDeg, thickness: t }));
 
-describe('laminate engine: A, B, D and H', () => {
+describe('laminate engine: A, B, D and H', function () {
+  this.timeout(30000); // bulk checks; generous for a loaded CI machine, they take well under a second alone
   it('reproduces Kaw Example 4.2: [0/30/-45] T300/5208, 5 mm plies (from memory)', () => {
     const s = laminateStiffness(stackOf('[0/30/-45]T', 5));
     // Kaw Ex. 4.2 (from memory), A in N/m -> N/mm (x 1e-3), B in N, D in N·m -> N·mm (x 1e3)

@@ -6,23 +6,21 @@
  */
 import { Router } from 'express';
 import type { OpenApiFragment } from '../http/openapi-types.ts';
-import {
-  analyseLaminate, CRITERIA, failureEnvelope, parseEnvelopeInput, parseLaminateInput, parsePolarInput, polarStiffness,
-} from '../laminate/index.ts';
+import { CRITERIA } from '../laminate/index.ts';
+import { runEngine } from './engine-runner.ts';
 
 export const laminateRouter = Router();
 
-laminateRouter.post('/laminates/analyze', (req, res) => {
-  res.json(analyseLaminate(parseLaminateInput(req.body)));
+laminateRouter.post('/laminates/analyze', async (req, res) => {
+  res.json(await runEngine('laminate.analyse', req.body));
 });
 
-laminateRouter.post('/laminates/envelope', (req, res) => {
-  res.json(failureEnvelope(parseEnvelopeInput(req.body)));
+laminateRouter.post('/laminates/envelope', async (req, res) => {
+  res.json(await runEngine('laminate.envelope', req.body));
 });
 
-laminateRouter.post('/laminates/polar', (req, res) => {
-  const input = parsePolarInput(req.body);
-  res.json(polarStiffness(input.plies, { stepDeg: input.stepDeg }));
+laminateRouter.post('/laminates/polar', async (req, res) => {
+  res.json(await runEngine('laminate.polar', req.body));
 });
 
 const num = (description: string) => ({ type: 'number', description });

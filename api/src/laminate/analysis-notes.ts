@@ -7,13 +7,19 @@ import type { PlyMaterial } from './types.ts';
 export function describeAssumptions(input: LaminateInput): string[] {
   const notes: string[] = [];
   const materials = new Map<PlyMaterial, number[]>();
-  input.plies.forEach((p, i) => {
-    const list = materials.get(p.material);
-    if (list) list.push(i);
-    else materials.set(p.material, [i]);
-  });
-  const withoutDensity = input.plies.flatMap((p, i) => (p.material.density === undefined ? [i] : []));
-  if (withoutDensity.length) notes.push(`density not given for plies ${describeIndices(withoutDensity)}: they count as 0 in arealMass`);
+  let last: PlyMaterial | null = null, lastList: number[] = [];
+  for (let i = 0; i < input.plies.length; i++) {
+    const m = input.plies[i].material;
+    if (m !== last) {
+      last = m;
+      lastList = materials.get(m) ?? [];
+      if (!materials.has(m)) materials.set(m, lastList);
+    }
+    lastList.push(i);
+  }
+  const withoutDensity: number[] = [];
+  for (const [m, plies] of materials) if (m.density === undefined) withoutDensity.push(...plies);
+  if (withoutDensity.length) notes.push(`density not given for plies ${describeIndices(withoutDensity.sort((a, b) => a - b))}: they count as 0 in arealMass`);
   if (input.criteria.includes('hashin')) {
     for (const [m, plies] of materials) if (m.S23 === undefined) notes.push(`hashin: S23 not given for plies ${describeIndices(plies)}: S23 = Yc / 2 = ${m.Yc! / 2} MPa assumed`);
   }

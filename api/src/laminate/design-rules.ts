@@ -30,11 +30,11 @@ function formatDeg(a: number): string {
 }
 
 /** Mirror symmetry about the mid-plane: ply k and ply n-1-k alike in orientation, thickness and material. */
-export function symmetricRule(plies: readonly PlyInput[]): RuleCheck {
+export function symmetricRule(plies: readonly PlyInput[], theta: readonly number[] = orientations(plies)): RuleCheck {
   const n = plies.length;
   for (let k = 0; k < n / 2; k++) {
     const a = plies[k], b = plies[n - 1 - k];
-    const why = fibreOrientationDeg(a.thetaDeg) !== fibreOrientationDeg(b.thetaDeg) ? `angle ${formatDeg(a.thetaDeg)} against ${formatDeg(b.thetaDeg)}`
+    const why = theta[k] !== theta[n - 1 - k] ? `angle ${formatDeg(a.thetaDeg)} against ${formatDeg(b.thetaDeg)}`
       : !close(a.thickness, b.thickness) ? `thickness ${a.thickness} mm against ${b.thickness} mm`
       : !sameMaterial(a.material, b.material) ? 'different materials' : null;
     if (why) return { rule: 'symmetric', pass: false, detail: `ply ${k} and its mirror ply ${n - 1 - k} differ: ${why}; B is not zero` };
@@ -43,14 +43,21 @@ export function symmetricRule(plies: readonly PlyInput[]): RuleCheck {
 }
 
 /** Balance: for every off-axis orientation +θ, as much thickness of the same material at -θ (A16 = A26 = 0). */
-export function balancedRule(plies: readonly PlyInput[]): RuleCheck {
+export function balancedRule(plies: readonly PlyInput[], thetas: readonly number[] = orientations(plies)): RuleCheck {
   const byMaterial = new Map<PlyMaterial, Map<number, number>>();
   const materials: PlyMaterial[] = [];
-  for (const ply of plies) {
-    let m = materials.find((x) => sameMaterial(x, ply.material));
-    if (!m) { m = ply.material; materials.push(m); byMaterial.set(m, new Map()); }
-    const theta = fibreOrientationDeg(ply.thetaDeg);
+  let last: PlyMaterial | null = null, lastKey: PlyMaterial | null = null;
+  for (let i = 0; i < plies.length; i++) {
+    const ply = plies[i];
+    const theta = thetas[i];
     if (theta === 0 || theta === 90) continue;
+    let m: PlyMaterial;
+    if (ply.material === last) m = lastKey!;
+    else {
+      m = materials.find((x) => sameMaterial(x, ply.material)) ?? ply.material;
+      if (!byMaterial.has(m)) { materials.push(m); byMaterial.set(m, new Map()); }
+      last = ply.material; lastKey = m;
+    }
     const sums = byMaterial.get(m)!;
     sums.set(theta, (sums.get(theta) ?? 0) + ply.thickness);
   }
@@ -68,32 +75,30 @@ export function balancedRule(plies: readonly PlyInput[]): RuleCheck {
 }
 
 /** At least 10 % of the plies (by count) in each of the 0°, ±45° and 90° families. */
-export function tenPercentRule(plies: readonly PlyInput[]): RuleCheck {
+export function tenPercentRule(plies: readonly PlyInput[], thetas: readonly number[] = orientations(plies)): RuleCheck {
   const n = plies.length;
   let zero = 0, pm45 = 0, ninety = 0;
-  for (const ply of plies) {
-    const theta = fibreOrientationDeg(ply.thetaDeg);
+  for (const theta of thetas) {
     if (theta === 0) zero++;
     else if (theta === 45 || theta === -45) pm45++;
     else if (theta === 90) ninety++;
   }
-  const pct = (k: number) => `${Number(((100 * k) / n).toPrecision(3))} %`;
+  const pct = (k: number) => `${Math.round((1000 * k) / n) / 10} %`;
   const detail = `0°: ${pct(zero)}, ±45°: ${pct(pm45)}, 90°: ${pct(ninety)} of ${n} plies`;
   const pass = [zero, pm45, ninety].every((k) => k >= 0.1 * n);
   return { rule: 'ten-percent-rule', pass, detail: pass ? detail : `${detail}; each family needs at least 10 %` };
 }
 
 /** No more than four adjacent plies of one orientation (matrix cracking and free-edge stresses grow with the block). */
-export function maxFourAdjacentRule(plies: readonly PlyInput[]): RuleCheck {
+export function maxFourAdjacentRule(plies: readonly PlyInput[], thetas: readonly number[] = orientations(plies)): RuleCheck {
   let longest = 0, longestStart = 0;
-  for (let i = 0; i < plies.length; ) {
+  for (let i = 0; i < thetas.length; ) {
     let j = i;
-    const theta = fibreOrientationDeg(plies[i].thetaDeg);
-    while (j + 1 < plies.length && fibreOrientationDeg(plies[j + 1].thetaDeg) === theta) j++;
+    while (j + 1 < thetas.length && thetas[j + 1] === thetas[i]) j++;
     if (j - i + 1 > longest) { longest = j - i + 1; longestStart = i; }
     i = j + 1;
   }
-  const where = `plies ${longestStart}-${longestStart + longest - 1} at ${formatDeg(fibreOrientationDeg(plies[longestStart].thetaDeg))}`;
+  const where = `plies ${longestStart}-${longestStart + longest - 1} at ${formatDeg(thetas[longestStart])}`;
   return longest > 4
     ? { rule: 'max-four-adjacent', pass: false, detail: `${longest} adjacent plies of one orientation (${where}); at most 4` }
     : { rule: 'max-four-adjacent', pass: true, detail: `the longest block of one orientation has ${longest} ${longest === 1 ? 'ply' : 'plies'}` };
@@ -107,6 +112,11 @@ export function outerPlies45Rule(plies: readonly PlyInput[]): RuleCheck {
   return { rule: 'outer-plies-45', pass, detail: `outer plies at ${formatDeg(first)} (bottom) and ${formatDeg(last)} (top)${pass ? '' : '; both should be ±45°'}` };
 }
 
+function orientations(plies: readonly PlyInput[]): number[] {
+  return plies.map((p) => fibreOrientationDeg(p.thetaDeg));
+}
+
 export function designRuleChecks(plies: readonly PlyInput[]): RuleCheck[] {
-  return [symmetricRule(plies), balancedRule(plies), tenPercentRule(plies), maxFourAdjacentRule(plies), outerPlies45Rule(plies)];
+  const thetas = orientations(plies);
+  return [symmetricRule(plies, thetas), balancedRule(plies, thetas), tenPercentRule(plies, thetas), maxFourAdjacentRule(plies, thetas), outerPlies45Rule(plies)];
 }

@@ -25,8 +25,8 @@ export function parseEnvelopeInput(json: unknown): EnvelopeInput {
   if (!AXES.includes(axes)) problems.push({ field: 'axes', message: `is ${JSON.stringify(obj.axes)}`, fix: 'use "Nx-Ny" or "Nx-Nxy"' });
   const points = optionalNumber(obj, 'points', '', problems, 360, { min: 4, max: 3600, fix: 'give a whole number of load directions from 4 to 3600' });
   if (!Number.isInteger(points)) problems.push({ field: 'points', message: `is ${points}`, fix: 'give a whole number of load directions from 4 to 3600' });
-  const deltaT = optionalNumber(obj, 'deltaT', '', problems, 0, { fix: 'give the temperature change from the stress-free temperature in °C' });
-  const deltaMoisture = optionalNumber(obj, 'deltaMoisture', '', problems, 0, { fix: 'give the moisture change as a mass fraction' });
+  const deltaT = optionalNumber(obj, 'deltaT', '', problems, 0, { min: -1e4, max: 1e4, fix: 'give the temperature change from the stress-free temperature in °C' });
+  const deltaMoisture = optionalNumber(obj, 'deltaMoisture', '', problems, 0, { min: -1, max: 1, fix: 'give the moisture change as a mass fraction' });
   requireExpansion(stack, deltaT !== 0, ['alpha1', 'alpha2'], 'deltaT is not zero', problems);
   requireExpansion(stack, deltaMoisture !== 0, ['beta1', 'beta2'], 'deltaMoisture is not zero', problems);
   const failure = parseFailureOptions(obj, problems);

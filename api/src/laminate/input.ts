@@ -7,7 +7,7 @@
 import type { InputProblem } from '../shared/input-error.ts';
 import { CRITERIA, type CriterionName, DEFAULT_PUCK, DEFAULT_TSAI_WU_F12_STAR, type FailureOptions } from './failure/criterion.ts';
 import { missingStrengths } from './failure/strengths.ts';
-import { geometryProblems, isFiniteNumber, materialProblems, plyCountProblem, throwIfProblems } from './ply-checks.ts';
+import { BOUNDS, geometryProblems, isFiniteNumber, materialProblems, plyCountProblem, throwIfProblems } from './ply-checks.ts';
 import type { LoadCase } from './stack-response.ts';
 import { parseStackingCode } from './stacking-code.ts';
 import type { StiffnessOptions } from './stiffness.ts';
@@ -94,11 +94,11 @@ export function parseStack(obj: Json, problems: InputProblem[]): StackInput {
     obj.plies.forEach((raw, i) => {
       const path = `plies[${i}]`;
       if (!isObject(raw)) { problems.push({ field: path, message: 'is not an object', fix: 'give { material, thetaDeg, thickness }' }); return; }
-      const geometry = geometryProblems(raw, path);
+      const geometry = geometryProblems(raw, path, true);
       problems.push(...geometry);
       const key = JSON.stringify(raw.material);
       if (!checked.has(key)) {
-        const found = materialProblems(raw.material, `${path}.material`);
+        const found = materialProblems(raw.material, `${path}.material`, true);
         problems.push(...found);
         checked.set(key, found.length === 0);
       }
@@ -116,19 +116,20 @@ export function parseStack(obj: Json, problems: InputProblem[]): StackInput {
     if (err instanceof InputError) problems.push(...err.problems);
     else throw err;
   }
-  const materialFound = materialProblems(obj.material, 'material');
+  const materialFound = materialProblems(obj.material, 'material', true);
   problems.push(...materialFound);
   const t = obj.plyThickness;
-  if (!isFiniteNumber(t) || t <= 0) problems.push({ field: 'plyThickness', message: t === undefined ? 'is missing' : `is ${JSON.stringify(t)}`, fix: 'give the thickness of every ply of the code, in mm, positive' });
-  if (materialFound.length || !isFiniteNumber(t) || t <= 0) return { plies: [], code: obj.code, materialPath: () => 'material' };
+  const thicknessOk = isFiniteNumber(t) && t >= BOUNDS.thickness[0] && t <= BOUNDS.thickness[1];
+  if (!thicknessOk) problems.push({ field: 'plyThickness', message: t === undefined ? 'is missing' : `is ${JSON.stringify(t)}`, fix: `give the thickness of every ply of the code in mm, from ${BOUNDS.thickness[0]} to ${BOUNDS.thickness[1]}` });
+  if (materialFound.length || !thicknessOk) return { plies: [], code: obj.code, materialPath: () => 'material' };
   const material = { ...(obj.material as PlyMaterial) };
   return { plies: angles.map((thetaDeg) => ({ material, thetaDeg, thickness: t })), code: obj.code, materialPath: () => 'material' };
 }
 
-/** A [x, y, xy] triple; `nullable` allows null entries (mixed input). */
-function triple(v: unknown, field: string, problems: InputProblem[], nullable: boolean, fix: string): (number | null)[] | null {
+/** A [x, y, xy] triple of magnitude at most `limit`; `nullable` allows null entries (mixed input). */
+function triple(v: unknown, field: string, problems: InputProblem[], nullable: boolean, fix: string, limit: number): (number | null)[] | null {
   if (v === undefined) return null;
-  if (!Array.isArray(v) || v.length !== 3 || !v.every((x) => isFiniteNumber(x) || (nullable && x === null))) {
+  if (!Array.isArray(v) || v.length !== 3 || !v.every((x) => (isFiniteNumber(x) && Math.abs(x) <= limit) || (nullable && x === null))) {
     problems.push({ field, message: `is ${JSON.stringify(v)}`, fix });
     return null;
   }
@@ -139,12 +140,12 @@ function parseLoads(raw: unknown, stack: StackInput, problems: InputProblem[]): 
   if (raw === undefined) return null;
   if (!isObject(raw)) { problems.push({ field: 'loads', message: 'is not an object', fix: 'give { "N": [Nx, Ny, Nxy], "M": [Mx, My, Mxy], "deltaT", "deltaMoisture" }' }); return null; }
   problems.push(...unknownKeyProblems(raw, LOAD_KEYS, 'loads'));
-  const N = triple(raw.N, 'loads.N', problems, true, 'give [Nx, Ny, Nxy] in N/mm (null where a mid-plane strain is prescribed instead)');
-  const M = triple(raw.M, 'loads.M', problems, true, 'give [Mx, My, Mxy] in N·mm/mm (null where a curvature is prescribed instead)');
-  const strain = triple(raw.midplaneStrain, 'loads.midplaneStrain', problems, true, 'give [εx, εy, γxy] with null where the load is given');
-  const curvature = triple(raw.curvature, 'loads.curvature', problems, true, 'give [κx, κy, κxy] in 1/mm with null where the moment is given');
-  const deltaT = optionalNumber(raw, 'deltaT', 'loads', problems, 0, { fix: 'give the temperature change from the stress-free temperature in °C (negative for cool-down after cure)' });
-  const deltaMoisture = optionalNumber(raw, 'deltaMoisture', 'loads', problems, 0, { fix: 'give the moisture change as a mass fraction (0.005 for 0.5 %)' });
+  const N = triple(raw.N, 'loads.N', problems, true, 'give [Nx, Ny, Nxy] in N/mm, each of magnitude up to 1e9 (null where a mid-plane strain is prescribed instead)', 1e9);
+  const M = triple(raw.M, 'loads.M', problems, true, 'give [Mx, My, Mxy] in N·mm/mm, each of magnitude up to 1e9 (null where a curvature is prescribed instead)', 1e9);
+  const strain = triple(raw.midplaneStrain, 'loads.midplaneStrain', problems, true, 'give [εx, εy, γxy], each of magnitude up to 1, with null where the load is given', 1);
+  const curvature = triple(raw.curvature, 'loads.curvature', problems, true, 'give [κx, κy, κxy] in 1/mm, each of magnitude up to 10, with null where the moment is given', 10);
+  const deltaT = optionalNumber(raw, 'deltaT', 'loads', problems, 0, { min: -1e4, max: 1e4, fix: 'give the temperature change from the stress-free temperature in °C (negative for cool-down after cure)' });
+  const deltaMoisture = optionalNumber(raw, 'deltaMoisture', 'loads', problems, 0, { min: -1, max: 1, fix: 'give the moisture change as a mass fraction (0.005 for 0.5 %)' });
   const loads: LoadCase = {
     N: [0, 1, 2].map((i) => N?.[i] ?? 0) as LoadCase['N'],
     M: [0, 1, 2].map((i) => M?.[i] ?? 0) as LoadCase['M'],

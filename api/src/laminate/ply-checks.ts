@@ -12,6 +12,20 @@ export const MAX_PLIES = 2000;
 const MAX_PROBLEMS = 20;
 
 const MODULI = ['E1', 'E2', 'G12'] as const;
+
+/**
+ * Plausibility bounds (internal units) wide enough for any real ply, core or
+ * load, and narrow enough that no product in the engine can overflow to
+ * Infinity: a reply never carries NaN or Infinity.
+ */
+export const BOUNDS = {
+  modulus: [1e-3, 1e7],
+  strength: [1e-6, 1e7],
+  strain: [1e-9, 10],
+  thickness: [1e-6, 1e4],
+  density: [0, 1e6],
+  expansion: 1,
+} as const;
 const OPTIONAL_POSITIVE = ['G13', 'G23', 'Xt', 'Xc', 'Yt', 'Yc', 'S12', 'S23', 'e1t', 'e1c', 'e2t', 'e2c', 'g12'] as const;
 const OPTIONAL_FINITE = ['alpha1', 'alpha2', 'beta1', 'beta2'] as const;
 
@@ -30,8 +44,14 @@ export function isFiniteNumber(v: unknown): v is number {
   return typeof v === 'number' && Number.isFinite(v);
 }
 
-/** Problems of one ply material; `path` is where it sits in the input (`plies[3].material` or `material`). */
-export function materialProblems(material: unknown, path: string): InputProblem[] {
+/**
+ * Problems of one ply material; `path` is where it sits in the input
+ * (`plies[3].material` or `material`). `bounded` adds the plausibility bounds
+ * (JSON input of the CLI and routes, in internal units); direct callers such as
+ * the section readers may use any consistent units and get only the
+ * finite / positive / positive-definite checks.
+ */
+export function materialProblems(material: unknown, path: string, bounded = false): InputProblem[] {
   if (material === null || typeof material !== 'object' || Array.isArray(material)) {
     return [{ field: path, message: 'is missing or not an object', fix: 'give { "E1", "E2", "G12", "nu12", ... } in MPa' }];
   }
@@ -41,6 +61,7 @@ export function materialProblems(material: unknown, path: string): InputProblem[
     const v = m[key];
     if (!isFiniteNumber(v)) problems.push({ field: `${path}.${key}`, message: v === undefined ? 'is missing' : 'is not a finite number', fix: `give ${FIELD_WORDS[key]}` });
     else if (v <= 0) problems.push({ field: `${path}.${key}`, message: `is ${v}; it must be positive`, fix: `give ${FIELD_WORDS[key]}` });
+    else if (bounded && (v < BOUNDS.modulus[0] || v > BOUNDS.modulus[1])) problems.push({ field: `${path}.${key}`, message: `is ${v} MPa, outside ${BOUNDS.modulus[0]} to ${BOUNDS.modulus[1]} MPa`, fix: `give ${FIELD_WORDS[key]}` });
   }
   if (!isFiniteNumber(m.nu12)) {
     problems.push({ field: `${path}.nu12`, message: m.nu12 === undefined ? 'is missing' : 'is not a finite number', fix: 'give the major Poisson ratio (e.g. 0.3)' });
@@ -55,25 +76,28 @@ export function materialProblems(material: unknown, path: string): InputProblem[
   for (const key of OPTIONAL_POSITIVE) {
     const v = m[key];
     if (v === undefined) continue;
+    const [lo, hi] = key.startsWith('G') ? BOUNDS.modulus : /^[eg]/.test(key) ? BOUNDS.strain : BOUNDS.strength;
     if (!isFiniteNumber(v) || v <= 0) problems.push({ field: `${path}.${key}`, message: `is ${JSON.stringify(v)}; it must be a positive number`, fix: `give ${FIELD_WORDS[key]} or leave it out` });
+    else if (bounded && (v < lo || v > hi)) problems.push({ field: `${path}.${key}`, message: `is ${v}, outside ${lo} to ${hi}`, fix: `give ${FIELD_WORDS[key]} or leave it out` });
   }
   for (const key of OPTIONAL_FINITE) {
     const v = m[key];
-    if (v !== undefined && !isFiniteNumber(v)) problems.push({ field: `${path}.${key}`, message: 'is not a finite number', fix: 'give the expansion coefficient per °C (alpha) or per unit moisture mass fraction (beta), or leave it out' });
+    if (v !== undefined && (!isFiniteNumber(v) || (bounded && Math.abs(v) > BOUNDS.expansion))) problems.push({ field: `${path}.${key}`, message: `is ${JSON.stringify(v)}; it must be a number of magnitude at most ${BOUNDS.expansion}`, fix: 'give the expansion coefficient per °C (alpha) or per unit moisture mass fraction (beta), or leave it out' });
   }
-  if (m.density !== undefined && (!isFiniteNumber(m.density) || m.density < 0)) {
-    problems.push({ field: `${path}.density`, message: `is ${JSON.stringify(m.density)}; it must be a number >= 0`, fix: 'give the density in kg/m³ or leave it out' });
+  if (m.density !== undefined && (!isFiniteNumber(m.density) || m.density < 0 || (bounded && m.density > BOUNDS.density[1]))) {
+    problems.push({ field: `${path}.density`, message: `is ${JSON.stringify(m.density)}; it must be a number from 0 to ${BOUNDS.density[1]}`, fix: 'give the density in kg/m³ or leave it out' });
   }
   if (m.name !== undefined && typeof m.name !== 'string') problems.push({ field: `${path}.name`, message: 'is not a string', fix: 'give a name or leave it out' });
   return problems;
 }
 
-/** Problems of the angle and thickness of one ply. */
-export function geometryProblems(ply: Record<string, unknown>, path: string): InputProblem[] {
+/** Problems of the angle and thickness of one ply (`bounded` as for materialProblems). */
+export function geometryProblems(ply: Record<string, unknown>, path: string, bounded = false): InputProblem[] {
   const problems: InputProblem[] = [];
-  if (!isFiniteNumber(ply.thetaDeg)) problems.push({ field: `${path}.thetaDeg`, message: ply.thetaDeg === undefined ? 'is missing' : 'is not a finite number', fix: 'give the ply angle in degrees from the laminate x axis' });
+  if (!isFiniteNumber(ply.thetaDeg) || (bounded && Math.abs(ply.thetaDeg) > 1e6)) problems.push({ field: `${path}.thetaDeg`, message: ply.thetaDeg === undefined ? 'is missing' : `is ${JSON.stringify(ply.thetaDeg)}`, fix: 'give the ply angle in degrees from the laminate x axis (-360 to 360 is usual)' });
   if (!isFiniteNumber(ply.thickness)) problems.push({ field: `${path}.thickness`, message: ply.thickness === undefined ? 'is missing' : 'is not a finite number', fix: 'give the ply thickness in mm' });
   else if (ply.thickness <= 0) problems.push({ field: `${path}.thickness`, message: `is ${ply.thickness}; it must be positive`, fix: 'give the ply thickness in mm' });
+  else if (bounded && (ply.thickness < BOUNDS.thickness[0] || ply.thickness > BOUNDS.thickness[1])) problems.push({ field: `${path}.thickness`, message: `is ${ply.thickness} mm, outside ${BOUNDS.thickness[0]} to ${BOUNDS.thickness[1]} mm`, fix: 'give the ply thickness in mm' });
   return problems;
 }
 

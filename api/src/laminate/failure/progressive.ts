@@ -9,8 +9,10 @@
  * ratio than the load already reached fails at that load (a cascade). The
  * progression ends when every ply has broken fibres, when no ply fails any more
  * along the load path, or when the load path is lost: the compliance along the
- * applied loads, Fᵀ abd F, has grown beyond 1000 times its intact value.
+ * applied loads, Fᵀ abd F, has grown beyond 1000 times its intact value (or the
+ * discounted ABD has become singular).
  */
+import { InputError } from '../../shared/input-error.ts';
 import { clonePlyTable, degradePly, type PlyTable } from '../ply-table.ts';
 import { emptyStackResponse, type LoadCase, stackResponse } from '../stack-response.ts';
 import { emptySectionStiffness, sectionStiffnessOf } from '../stiffness.ts';
@@ -51,7 +53,13 @@ export function progressiveFailure(
   let intactCompliance = NaN;
   let endedBy: ProgressiveFailure['endedBy'] = 'all-plies-failed';
   for (let step = 1; step <= 2 * n; step++) {
-    sectionStiffnessOf(table, section);
+    try {
+      sectionStiffnessOf(table, section);
+    } catch (err) {
+      // the discounted laminate has no stiffness left in some direction: it carries nothing more
+      if (step > 1 && err instanceof InputError) { endedBy = 'load-path-lost'; break; }
+      throw err;
+    }
     stackResponse(table, section, load, response);
     const compliance = complianceAlongLoads(section.abdCompliance, load);
     if (step === 1) intactCompliance = compliance;

@@ -10,10 +10,12 @@
  * the groups. In each interval the mode polynomial is a quadratic
  * a R² + b R + c in R, solved in the cancellation-free form
  * q = -(b + sign(b) sqrt(b² - 4ac)) / 2, roots q/a and c/q (Press et al.,
- * Numerical Recipes, section 5.6). A root counts only if the published index of
- * its mode is 1 there (this rejects roots brought in by squaring out a square
- * root). Should rounding reject every root of an interval whose far end has
- * failed, the crossing is bracketed and bisected instead.
+ * Numerical Recipes, section 5.6, from memory). For squared-out modes (Puck) a
+ * root counts only if the published index is 1 there, which rejects roots
+ * brought in by the squaring; where a root was rejected, or a mode that must
+ * fail showed no root (rounding), the crossing is bracketed and bisected on the
+ * published index instead. Maximum stress and maximum strain are independent
+ * linear limits and are solved directly, limit by limit.
  */
 import { type CriterionPlan, type LinearLimits, type ModeGroup, modeOfGroup } from './criterion.ts';
 
@@ -32,7 +34,7 @@ export class RayFailure {
 const ROOT_TOLERANCE = 1e-6;
 const cuts = new Float64Array(8);
 
-/** the ray σ = R + x M, shared by the helpers below during one solve */
+/** the ray σ(x) = R + x M (residual R, mechanical M), shared by the helpers below during one solve */
 let R1 = 0, R2 = 0, R6 = 0, M1 = 0, M2 = 0, M6 = 0;
 /** set by modeCrossing: the mode's polynomial grows without bound along the ray, so failure must come */
 let unbounded = false;
