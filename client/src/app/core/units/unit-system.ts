@@ -1,8 +1,9 @@
 import { DOCUMENT } from '@angular/common';
 import { inject, Injectable, signal } from '@angular/core';
 
-/** SI (N, mm, MPa) or US customary (lbf, in, psi). */
-export type UnitSystem = 'SI' | 'US';
+import type { UnitSystem } from './unit-conversion';
+
+export type { UnitSystem };
 
 const STORAGE_KEY = 'plyledger.unit-system';
 
