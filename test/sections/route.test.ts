@@ -26,6 +26,12 @@ describe('POST /sections/:format', () => {
     });
   }
 
+  it('400 naming a misspelt option rather than exporting with the default', async () => {
+    const res = await request(app).post('/sections/calculix').send({ laminate: LAMINATE, options: { unit: 'lbf-in' } });
+    expect(res.status).to.equal(400);
+    expect(res.body.error.details.problems[0].field).to.equal('options.unit');
+  });
+
   it('400 in the API error shape for an unknown format', async () => {
     const res = await request(app).post('/sections/step').send({ laminate: LAMINATE });
     expect(res.status).to.equal(400);

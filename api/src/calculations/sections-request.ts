@@ -25,10 +25,19 @@ function objectBody(body: unknown, keys: string[], fix: string): Json {
   return obj;
 }
 
+const SECTION_OPTION_KEYS = [
+  'units', 'propertyId', 'materialId', 'elset', 'referenceOffset', 'layupName', 'layupRevision', 'allowables', 'date', 'freeField', 'failureTheory', 'xAxis', 'normal',
+] as const satisfies ReadonlyArray<keyof SectionOptions>;
+
 function optionsOf(value: unknown): SectionOptions {
   if (value === undefined) return {};
   if (value === null || typeof value !== 'object' || Array.isArray(value)) {
     throw new InputError({ field: 'options', message: 'is not an object', fix: 'give { "units", "elset", "propertyId", ... } or leave it out' });
+  }
+  // A misspelt option (say "unit" for "units") must not pass silently as the default.
+  const unknown = Object.keys(value).filter((k) => !(SECTION_OPTION_KEYS as readonly string[]).includes(k));
+  if (unknown.length) {
+    throw new InputError(unknown.map((k) => ({ field: `options.${k}`, message: 'is not an export option', fix: `use only ${SECTION_OPTION_KEYS.join(', ')}` })));
   }
   return value as SectionOptions;
 }
