@@ -19,7 +19,7 @@ import { analyseLaminate, CRITERIA, parseLaminateInput } from '../../api/src/lam
 import { readJson, type SignedIn } from '../support/sign-in.ts';
 import type { BenchFigure, BenchSection } from './bench-types.ts';
 import { startBenchStack, type BenchStack } from './support/bench-stack.ts';
-import { probeLatency, runLoad, type LatencySummary, type LoadRequest, type LoadResult } from './support/load.ts';
+import { median, probeLatency, runLoad, type LatencySummary, type LoadRequest, type LoadResult } from './support/load.ts';
 
 const CONNECTIONS = 50;
 const DURATION_S = 10;
@@ -39,11 +39,6 @@ const laminateBody = {
   loads: { N: [300, 100, 20], M: [5, -2, 0], deltaT: -120 }, criteria: [...CRITERIA],
 };
 
-const median = (values: number[]) => {
-  const sorted = [...values].sort((a, b) => a - b);
-  const mid = sorted.length >> 1;
-  return sorted.length % 2 ? sorted[mid] : (sorted[mid - 1] + sorted[mid]) / 2;
-};
 const sleep = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
 
 interface Target {
@@ -118,6 +113,17 @@ function engineCpuMs(): number {
   return (used.user + used.system) / 1000 / batch;
 }
 
+/** The API process's engine threads, as startApi reads them (the child inherits this environment). */
+const engineThreads = () => Number(process.env.PLYLEDGER_ENGINE_THREADS ?? Math.max(1, os.availableParallelism() - 1));
+
+/** One run after a short warm-up. */
+async function floorUnderLoad(request: LoadRequest): Promise<LoadResult> {
+  await runLoad({ ...request, durationS: WARMUP_S });
+  return runLoad(request);
+}
+
+const describeFloor = (r: LoadResult) => `${r.requestsPerSecond.toFixed(0)} req/s, p50 ${r.p50Ms.toFixed(1)} ms, p95 ${r.p95Ms.toFixed(1)} ms, errors ${r.errors}`;
+
 const describeRuns = (runs: TargetRuns) =>
   `${runs.target.name}: runs ${runs.loads.map((r) => `${r.requestsPerSecond.toFixed(0)} req/s p95 ${r.p95Ms.toFixed(1)} ms errors ${r.errors}${r.errors ? ` ${JSON.stringify(r.statusCodes)}` : ''}`).join('; ')}; health p95 during ${runs.healthDuring.map((h) => h.p95Ms.toFixed(1)).join(', ')} ms (${runs.healthDuring.reduce((n, h) => n + h.count, 0)} probes, ${runs.healthDuring.reduce((n, h) => n + h.failures, 0)} failed)`;
 
@@ -145,18 +151,34 @@ export async function run(): Promise<BenchSection> {
       name: 'coupon list, filtered',
       request: { ...common, url: `${stack.apiUrl}${listPath}`, method: 'GET', headers: headersOf(s, false) },
     });
+    // Floors of the stack under the same load: the public health route (no session, one select 1)
+    // and the signed-in GET /me (session read and touch, one small query), one run each.
+    const healthLoaded = await floorUnderLoad({ ...common, url: `${stack.apiUrl}/api/v1/health` });
+    const meLoaded = await floorUnderLoad({ ...common, url: `${stack.apiUrl}/api/v1/me`, headers: headersOf(s, false) });
     const engineMs = engineCpuMs();
     return {
       name: `API under load (autocannon, ${CONNECTIONS} connections, ${DURATION_S} s, signed in)`,
-      figures: [...figuresOf(laminate, healthAlone), ...figuresOf(coupons, healthAlone)],
+      figures: [
+        ...figuresOf(laminate, healthAlone),
+        ...figuresOf(coupons, healthAlone),
+        {
+          figure: `floor: health route itself under the same load: p95 latency`, median: healthLoaded.p95Ms, unit: 'ms', runs: 1,
+          reference: { label: 'health route alone, p95', median: healthAlone.p95Ms, unit: 'ms' }, ratio: healthLoaded.p95Ms / healthAlone.p95Ms,
+        },
+        {
+          figure: `floor: signed-in GET /api/v1/me under the same load: p95 latency`, median: meLoaded.p95Ms, unit: 'ms', runs: 1,
+          reference: { label: 'health route alone, p95', median: healthAlone.p95Ms, unit: 'ms' }, ratio: meLoaded.p95Ms / healthAlone.p95Ms,
+        },
+      ],
       notes: [
         `laminate: ${laminateBody.code} of an invented carbon/epoxy, N = (300, 100, 20) N/mm, M = (5, -2, 0) N·mm/mm, ΔT = -120 °C, all six criteria; the engine alone takes ${engineMs.toFixed(3)} ms CPU per analysis on this process's thread`,
         `coupon list: GET ${listPath.replace(/material=\d+/, 'material=<FR-UC300>')} on the seeded demo data (${listTotal} coupons match, ${listItems} on the page)`,
         `health route alone (probe every ${PROBE_EVERY_MS} ms for ${PROBE_ALONE_S} s, before any load): p50 ${healthAlone.p50Ms.toFixed(2)} ms, p95 ${healthAlone.p95Ms.toFixed(2)} ms, p99 ${healthAlone.p99Ms.toFixed(2)} ms over ${healthAlone.count} requests`,
+        `floors under ${CONNECTIONS} connections, what this machine gives a route that does almost nothing: health (public) ${describeFloor(healthLoaded)}; GET /me (signed in) ${describeFloor(meLoaded)}`,
         describeRuns(laminate),
         describeRuns(coupons),
         'each request passes sessions (a select and, with rolling cookies, an update of the sessions table), CSRF and the role guard; the health route is public and asks the database for select 1 through the same Knex pool (10 connections) as the coupon list',
-        'POST /laminates/analyze calls the laminate engine on the request thread (laminate.routes.ts does not go through runEngine / the piscina pool, unlike the statistics and section routes); at 16 plies the engine is a small share of a request, so the health latency during that load measures queueing for the 2 cores more than a blocked event loop',
+        `POST /laminates/analyze sends the engine work through runEngine (api/src/calculations/engine-runner.ts): ${engineThreads() ? `to the API's worker pool of ${engineThreads()} thread(s)` : 'inline on the request thread'} (PLYLEDGER_ENGINE_THREADS, default cores - 1); a 16-ply analysis is a fraction of a millisecond of engine time, so most of each request is the HTTP, session and reply work on the event loop, plus the copy of the result back from the worker`,
         `the load generator, the probe, the API and PostgreSQL share ${os.cpus().length} cores with other people's test stacks: one-minute load average ${loadAtStart.toFixed(2)} at the start, ${os.loadavg()[0].toFixed(2)} at the end`,
       ],
     };

@@ -20,6 +20,7 @@ import { readJson, type SignedIn } from '../support/sign-in.ts';
 import { type BenchSection } from './bench-types.ts';
 import { couponCsv, STORED_COLUMNS, storedCouponCsv, type CouponFileSpec, type StoredCatalogue } from './support/bench-coupons.ts';
 import { startBenchStack, type BenchStack } from './support/bench-stack.ts';
+import { median } from './support/load.ts';
 import { readProcessMemory, watchPeakMemory } from './support/process-memory.ts';
 import { copyCsvInto } from './support/psql.ts';
 
@@ -31,12 +32,6 @@ const PANELS_PER_BATCH = 10;
 const TARGET_RATIO = 3;
 const TARGET_PEAK_MB = 500;
 const MATERIAL_CODE = 'BENCH-IMPORT-T300';
-
-const median = (values: number[]) => {
-  const sorted = [...values].sort((a, b) => a - b);
-  const mid = sorted.length >> 1;
-  return sorted.length % 2 ? sorted[mid] : (sorted[mid - 1] + sorted[mid]) / 2;
-};
 
 const spec = (prefix: string, rows = ROWS): CouponFileSpec => ({ materialCode: MATERIAL_CODE, prefix, rows, batches: BATCHES, panelsPerBatch: PANELS_PER_BATCH });
 

@@ -55,8 +55,9 @@ async function generateCoupons(trx: Knex, userId: number): Promise<boolean> {
   const [{ rolsuper }] = (await trx.raw('select rolsuper from pg_roles where rolname = current_user')).rows;
   if (rolsuper) await trx.raw('set local session_replication_role = replica');
   // The lookups below join a million generated rows to a thousand catalogue rows
-  // written moments ago: fresh statistics, and hash joins only (a nested loop
-  // chosen on a bad estimate turns a minute into an hour).
+  // written moments ago: fresh statistics, each lookup materialised whole and
+  // hash joins only (a nested loop, or panels joined on their number before
+  // their batch, chosen on a bad estimate turns a minute into an hour).
   await trx.raw('analyze material_systems, batches, panels, uploads');
   await trx.raw('set local enable_nestloop = off');
   await trx.raw('set local jit = off');
@@ -85,16 +86,16 @@ async function generateCoupons(trx: Knex, userId: number): Promise<boolean> {
         sqrt(-2 * ln(1 - random())) * cos(2 * pi() * random()) as z,
         random() - 0.5 as w
       from ids
-    ), places as (
+    ), places as materialized (
       select (regexp_match(ms.code, '^GEN-M(\\d+)$'))[1]::int as m, (regexp_match(ba.code, '^B(\\d+)$'))[1]::int as b, (regexp_match(pa.code, '^P(\\d+)$'))[1]::int as p,
         ms.id as material_id, ba.id as batch_id, pa.id as panel_id
       from material_systems ms join batches ba on ba.material_id = ms.id join panels pa on pa.batch_id = ba.id
       where ms.code like 'GEN-M%'
-    ), tests as (
+    ), tests as materialized (
       select tp.*, tm.id as test_method_id from ${TESTS_SQL} join test_methods tm on tm.code = tp.method
-    ), conds as (
+    ), conds as materialized (
       select k - 1 as c, co.id from unnest(array['CTD', 'RTD', 'ETD', 'ETW']) with ordinality x(code, k) join conditions co on co.code = x.code
-    ), ups as (
+    ), ups as materialized (
       select (regexp_match(file_name, '^generated-(\\d+)[.]csv$'))[1]::int as u, id from uploads where file_name like 'generated-%'
     ), v as (
       select g.*, tests.property, tests.test_method_id, tests.modulus * (1 + 0.04 * g.w) as modulus,

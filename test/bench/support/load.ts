@@ -15,15 +15,27 @@ export function percentile(values: readonly number[], p: number): number {
   return sorted[Math.min(sorted.length - 1, Math.max(0, Math.ceil((p / 100) * sorted.length) - 1))];
 }
 
+/** Median of measured values (the mean of the middle two for an even count). */
+export function median(values: readonly number[]): number {
+  if (!values.length) return Number.NaN;
+  const sorted = [...values].sort((a, b) => a - b);
+  const mid = sorted.length >> 1;
+  return sorted.length % 2 ? sorted[mid] : (sorted[mid - 1] + sorted[mid]) / 2;
+}
+
 export interface LatencySummary {
   count: number;
   p50Ms: number;
   p95Ms: number;
   p99Ms: number;
+  maxMs: number;
 }
 
 export function summariseLatencies(latenciesMs: readonly number[]): LatencySummary {
-  return { count: latenciesMs.length, p50Ms: percentile(latenciesMs, 50), p95Ms: percentile(latenciesMs, 95), p99Ms: percentile(latenciesMs, 99) };
+  return {
+    count: latenciesMs.length, p50Ms: percentile(latenciesMs, 50), p95Ms: percentile(latenciesMs, 95), p99Ms: percentile(latenciesMs, 99),
+    maxMs: latenciesMs.length ? latenciesMs.reduce((a, b) => Math.max(a, b), -Infinity) : Number.NaN,
+  };
 }
 
 export interface LoadRequest {
