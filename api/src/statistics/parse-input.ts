@@ -16,6 +16,9 @@ function isRecord(x: unknown): x is Record<string, unknown> {
   return typeof x === 'object' && x !== null && !Array.isArray(x);
 }
 
+/** Largest magnitude accepted for a value: far beyond any property in any unit (a strength in Pa is about 1e9), small enough that every statistic of 10,000 values stays finite. */
+export const MAX_ABS_VALUE = 1e15;
+
 function parseValues(raw: unknown, problems: InputProblem[]): number[] {
   if (!Array.isArray(raw)) {
     problems.push({ field: 'values', message: raw === undefined ? 'is missing' : 'must be an array of numbers', fix: 'give the measured values as "values": [number, ...]' });
@@ -24,6 +27,8 @@ function parseValues(raw: unknown, problems: InputProblem[]): number[] {
   if (raw.length > MAX_VALUES) problems.push({ field: 'values', message: `has ${raw.length} entries, more than the ${MAX_VALUES} allowed`, fix: 'split the data into data groups' });
   raw.forEach((x, i) => {
     if (typeof x !== 'number' || !Number.isFinite(x)) problems.push({ field: `values[${i}]`, message: `is ${JSON.stringify(x) ?? 'undefined'}, not a finite number`, fix: 'give a number (no text, null, NaN or Infinity)' });
+    // Sums and squares of the values must stay finite (1e308 would overflow the mean to Infinity).
+    else if (Math.abs(x) > MAX_ABS_VALUE) problems.push({ field: `values[${i}]`, message: `is ${x}, beyond ±${MAX_ABS_VALUE.toExponential()}`, fix: 'check the unit and the decimal point: no material property comes near this' });
   });
   return raw as number[];
 }
