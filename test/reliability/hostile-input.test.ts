@@ -138,6 +138,17 @@ describe('hostile input', function () {
     expect(list.items.map((s: { laboratory: string }) => s.laboratory)).to.deep.equal([SQL_METACHARACTERS, SQL_METACHARACTERS]);
   });
 
+  it('refuses a CSV with a NUL byte in a cell, naming the row, and stores nothing (found by this fuzz test)', async () => {
+    const material = await createMaterial();
+    const lines = csvOf(couponRows(material.code, { batches: 1, perBatch: 3 })).split('\r\n');
+    lines[2] = lines[2].replace('Test laboratory', 'Test\u0000laboratory');
+    const before = await importTableCounts();
+    const { status, body } = await upload(lines.join('\r\n'));
+    expect(status).to.equal(400);
+    expect(body.error.details.problems[0]).to.include({ row: 3, code: 'nul_byte' });
+    expect(await importTableCounts()).to.deep.equal(before);
+  });
+
   it('refuses an oversize JSON body with 413 before reading it whole', async () => {
     const s = await session('viewer');
     const huge = JSON.stringify({ values: new Array(400_000).fill(123.456), batches: [] });

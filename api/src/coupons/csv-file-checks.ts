@@ -59,6 +59,14 @@ export function decodeCouponFile(content: Buffer): string {
     ]);
   }
   if (text.trim() === '') throw new CsvImportError(400, 'csv_empty', 'The file has no rows', [{ field: 'file', code: 'empty_file', message: 'the file holds only blank space', fix: 'choose the CSV file with the coupon results' }]);
+  // A NUL byte is valid UTF-8 but no text column in PostgreSQL can hold it: refuse the file, naming the row.
+  const nul = text.indexOf('\u0000');
+  if (nul >= 0) {
+    const row = text.slice(0, nul).split(/\r?\n/).length;
+    throw new CsvImportError(400, 'csv_binary', `The file holds a NUL byte (row ${row}); it is not a text CSV file`, [
+      { row, field: 'file', code: 'nul_byte', message: 'a NUL (zero) byte, which text files do not contain', fix: 'export the data again as "CSV UTF-8" from the spreadsheet or the test machine' },
+    ]);
+  }
   const newline = text.search(/\r?\n/);
   const firstLine = newline < 0 ? text : text.slice(0, newline);
   if (!firstLine.includes(',')) {
