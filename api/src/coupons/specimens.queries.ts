@@ -116,7 +116,8 @@ export async function selectSpecimenPage(db: Knex, filter: SpecimenFilter, sort:
   const [{ count }] = await filtered(db, filter).count<{ count: string }[]>('* as count');
   const rows: SpecimenRow[] = await filtered(db, filter)
     .select(db.raw(COLUMNS))
-    .orderByRaw(`${SORTABLE[sort]} ${descending ? 'desc' : 'asc'} nulls last, id ${descending ? 'desc' : 'asc'}`)
+    // Qualified with the table: a bare test_date would sort by the to_char alias of COLUMNS (text), which no index serves.
+    .orderByRaw(`specimens.${SORTABLE[sort]} ${descending ? 'desc' : 'asc'} nulls last, specimens.id ${descending ? 'desc' : 'asc'}`)
     .offset(offset)
     .limit(limit);
   return { total: Number(count), rows };
