@@ -30,6 +30,17 @@ describe('coupon table: paging, sorting, filters, exclusion', function () {
     expect(ids.size).to.equal(15);
   });
 
+  it('sorts by test date both ways, with ties in id order', async () => {
+    for (const order of ['asc', 'desc'] as const) {
+      const sorted = await getJson('designer', `/api/v1/specimens?material=${material.id}&sort=testDate&order=${order}&pageSize=200`);
+      expect(sorted.status).to.equal(200);
+      const dates = sorted.body.items.map((s: { testDate: string }) => s.testDate);
+      const expected = [...dates].sort();
+      expect(dates, order).to.deep.equal(order === 'asc' ? expected : expected.reverse());
+      expect(new Set(dates).size, 'the rows carry several dates').to.be.above(1);
+    }
+  });
+
   it('sorts by strength, descending, and filters by condition, batch, upload and property', async () => {
     const sorted = await getJson('designer', `/api/v1/specimens?material=${material.id}&sort=strengthMpa&order=desc&pageSize=200`);
     const strengths = sorted.body.items.map((s: { strengthMpa: number }) => s.strengthMpa);
