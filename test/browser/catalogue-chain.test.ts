@@ -243,8 +243,11 @@ describe('browser: coupon upload to approved allowable (Chromium)', function () 
 
     // The CSV of approved values carries it, under the caution line.
     await page.goto(`${apiUrl()}/allowables`);
-    const href = await page.locator('[data-testid="allowables-csv"]').getAttribute('href');
-    const csv = await page.evaluate(async (url) => (await fetch(url!)).text(), href);
+    // The router inserts the page before its first change detection binds the link, so wait for the href.
+    const link = await page.waitForFunction(() => document.querySelector('[data-testid="allowables-csv"]')?.getAttribute('href') || null);
+    const href = (await link.jsonValue()) as string;
+    expect(href).to.match(/\/api\/v1\/allowables\/approved\.csv/);
+    const csv = await page.evaluate(async (url) => (await fetch(url)).text(), href);
     expect(csv.split('\n')[0]).to.match(/^# /);
     expect(csv).to.include(MATERIAL).and.to.include(PROPERTY);
   });
