@@ -58,6 +58,8 @@ export function createApp(deps: AppDeps) {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
+  // Replies of the API are built per request and never cached (below), so an ETag would only cost a hash of each body.
+  app.set('etag', false);
 
   app.use(
     pinoHttp({
@@ -100,6 +102,11 @@ export function createApp(deps: AppDeps) {
   });
   app.use('/api/v1', publicApi);
 
+  // Signed-in data stays out of shared and browser caches.
+  app.use(['/api', '/auth'], (_req, res, next) => {
+    res.setHeader('Cache-Control', 'no-store');
+    next();
+  });
   const sessions = sessionMiddleware(config, deps.pool, (message) => deps.logger.warn(message));
   const csrf = csrfProtection(config);
   app.use(['/api', '/auth'], sessions.middleware, csrf.issueToken);

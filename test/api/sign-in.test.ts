@@ -6,6 +6,7 @@ import { expect } from 'chai';
 import request from 'supertest';
 import { DEMO_ACCOUNTS } from '../../auth-fake/demo-accounts.ts';
 import { safeReturnTo } from '../../api/src/auth/auth.routes.ts';
+import { throttleTouch, TOUCH_EVERY_MS } from '../../api/src/auth/session.ts';
 import { signIn, CookieJar, readJson } from '../support/sign-in.ts';
 import { apiUrl, stack, testDb } from '../support/stack.ts';
 
@@ -57,6 +58,24 @@ describe('sign-in with OpenID Connect (real auth-fake, real sessions)', () => {
     const login = await fetch(`${apiUrl()}/auth/login`, { redirect: 'manual' });
     const cookie = login.headers.getSetCookie().find((c) => c.startsWith('plyledger.sid='))!;
     expect(cookie).to.match(/HttpOnly/i).and.match(/SameSite=Lax/i);
+  });
+
+  it('ends a session after eight idle hours on the server; the cookie itself lasts the browser session', async () => {
+    const session = await signIn(apiUrl(), 'designer');
+    const sid = decodeURIComponent(session.jar.get('plyledger.sid')!).replace(/^s:/, '').split('.')[0];
+    const login = await fetch(`${apiUrl()}/auth/login`, { redirect: 'manual' });
+    const cookie = login.headers.getSetCookie().find((c) => c.startsWith('plyledger.sid='))!;
+    expect(cookie, 'no Expires or Max-Age: the browser drops it when it closes').to.not.match(/expires=|max-age=/i);
+    const row = await testDb()('sessions').where({ sid }).first('expire');
+    const hoursLeft = (new Date(row.expire).getTime() - Date.now()) / 3600e3;
+    expect(hoursLeft, 'idle limit written at sign-in (api/src/auth/session.ts: eight hours, the project\'s choice)').to.be.within(7.9, 8.01);
+    // A signed-in request within the minute does not answer with a new cookie.
+    const me = await session.api('/api/v1/me');
+    expect(me.status).to.equal(200);
+    expect(me.headers.getSetCookie().some((c) => c.startsWith('plyledger.sid='))).to.equal(false);
+    // Past its expiry the row no longer signs anyone in.
+    await testDb()('sessions').where({ sid }).update({ expire: testDb().raw("now() - interval '1 second'") });
+    expect((await session.api('/api/v1/me')).status).to.equal(401);
   });
 
   it('writes the sign-in to the audit log', async () => {
@@ -167,5 +186,30 @@ describe('transfer', () => {
   it('compresses the client bundle and API replies (gzip)', async () => {
     const res = await request(apiUrl()).get('/api/v1/openapi.json').set('Accept-Encoding', 'gzip');
     expect(res.headers['content-encoding']).to.equal('gzip');
+  });
+});
+
+describe('session expiry writes (throttleTouch)', () => {
+  it('writes one session\'s expiry at most once a minute, each session on its own, and again after a failed write', () => {
+    const writes: string[] = [];
+    let fail = false;
+    const store = { touch: (sid: string, _sess: unknown, done?: (err?: unknown) => void) => { writes.push(sid); done?.(fail ? new Error('database down') : undefined); } };
+    let clock = 1_000_000;
+    throttleTouch(store as never, TOUCH_EVERY_MS, () => clock);
+    const touch = (sid: string) => new Promise((resolve) => store.touch(sid, {}, resolve));
+    return (async () => {
+      await touch('a');
+      await touch('a');
+      await touch('b');
+      clock += TOUCH_EVERY_MS - 1;
+      await touch('a');
+      expect(writes).to.deep.equal(['a', 'b']);
+      clock += 1;
+      fail = true;
+      expect(await touch('a')).to.be.instanceOf(Error);
+      fail = false;
+      await touch('a');
+      expect(writes, 'a failed write is tried again on the next request').to.deep.equal(['a', 'b', 'a', 'a']);
+    })();
   });
 });
