@@ -14,6 +14,8 @@ export type EngineReply = { ok: true; value: unknown } | { ok: false; problems: 
 
 export interface EnginePool {
   run: <T = unknown>(task: EngineTaskName, input: unknown) => Promise<T>;
+  /** The task's result as JSON text, serialised in the worker. */
+  runJson: (task: EngineTaskName, input: unknown) => Promise<string>;
   close: () => Promise<void>;
 }
 
@@ -27,12 +29,14 @@ export function createEnginePool(options: { threads?: number } = {}): EnginePool
     // Queue a bounded amount of work; past it, answer busy rather than pile up memory.
     maxQueue: threads * 256,
   });
+  const call = async (task: EngineTaskName, input: unknown, json: boolean) => {
+    const reply = (await pool.run({ task, input, json })) as EngineReply;
+    if (!reply.ok) throw new InputError(reply.problems, reply.message);
+    return reply.value;
+  };
   return {
-    async run<T>(task: EngineTaskName, input: unknown): Promise<T> {
-      const reply = (await pool.run({ task, input })) as EngineReply;
-      if (!reply.ok) throw new InputError(reply.problems, reply.message);
-      return reply.value as T;
-    },
+    run: async <T>(task: EngineTaskName, input: unknown) => (await call(task, input, false)) as T,
+    runJson: async (task: EngineTaskName, input: unknown) => (await call(task, input, true)) as string,
     close: () => pool.destroy(),
   };
 }

@@ -7,20 +7,20 @@
 import { Router } from 'express';
 import type { OpenApiFragment } from '../http/openapi-types.ts';
 import { CRITERIA } from '../laminate/index.ts';
-import { runEngine } from './engine-runner.ts';
+import { runEngineJson, sendJsonText } from './engine-runner.ts';
 
 export const laminateRouter = Router();
 
 laminateRouter.post('/laminates/analyze', async (req, res) => {
-  res.json(await runEngine('laminate.analyse', req.body));
+  sendJsonText(res, await runEngineJson('laminate.analyse', req.body));
 });
 
 laminateRouter.post('/laminates/envelope', async (req, res) => {
-  res.json(await runEngine('laminate.envelope', req.body));
+  sendJsonText(res, await runEngineJson('laminate.envelope', req.body));
 });
 
 laminateRouter.post('/laminates/polar', async (req, res) => {
-  res.json(await runEngine('laminate.polar', req.body));
+  sendJsonText(res, await runEngineJson('laminate.polar', req.body));
 });
 
 const num = (description: string) => ({ type: 'number', description });

@@ -8,7 +8,7 @@
 import { Router } from 'express';
 import type { OpenApiFragment } from '../http/openapi-types.ts';
 import { SECTION_CAUTION, SECTION_FORMATS, UNIT_SYSTEM_NAMES, type SectionFile } from '../sections/index.ts';
-import { runEngine } from './engine-runner.ts';
+import { runEngine, runEngineJson, sendJsonText } from './engine-runner.ts';
 
 /** Quotes a file name for Content-Disposition (RFC 6266): ASCII fallback and the UTF-8 form. */
 function contentDisposition(fileName: string): string {
@@ -19,7 +19,7 @@ function contentDisposition(fileName: string): string {
 export const sectionsRouter = Router();
 
 sectionsRouter.post('/sections/checks/:check', async (req, res) => {
-  res.json(await runEngine('sections.check', { check: req.params.check, body: req.body }));
+  sendJsonText(res, await runEngineJson('sections.check', { check: req.params.check, body: req.body }));
 });
 
 sectionsRouter.post('/sections/:format', async (req, res) => {

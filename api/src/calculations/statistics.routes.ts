@@ -8,12 +8,12 @@
 import { Router } from 'express';
 import type { OpenApiFragment } from '../http/openapi-types.ts';
 import { BASIS_METHODS, MAX_VALUES } from '../statistics/index.ts';
-import { runEngine } from './engine-runner.ts';
+import { runEngineJson, sendJsonText } from './engine-runner.ts';
 
 export const statisticsRouter = Router();
 
 statisticsRouter.post('/statistics/basis', async (req, res) => {
-  res.json(await runEngine('statistics.basis', req.body));
+  sendJsonText(res, await runEngineJson('statistics.basis', req.body));
 });
 
 const ref = (name: string) => ({ $ref: `#/components/schemas/${name}` });
