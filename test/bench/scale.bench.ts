@@ -157,7 +157,7 @@ function listFigure(r: ListResult): BenchFigure {
 }
 
 const planNote = (r: ListResult) =>
-  `${r.variant.name}: p50 ${median(r.p50Ms).toFixed(1)} ms, errors ${r.errors}; ${r.statements} statements per page; on specimens ${r.plans.map((p, i) => `[${i === 0 ? 'count' : i === 1 ? 'page' : `statement ${i + 1}`} ${p.executionMs.toFixed(1)} ms: ${[...new Set(p.scans)].join(', ')}]`).join(' ')}`;
+  `${r.variant.name}: p50 ${median(r.p50Ms).toFixed(1)} ms, errors ${r.errors}; ${r.statements} statements per page; on specimens ${r.plans.map((p, i) => `[${/\bcount\(/i.test(p.sql) ? 'count' : /\border by\b/i.test(p.sql) ? 'page' : `statement ${i + 1}`} ${p.executionMs.toFixed(1)} ms: ${[...new Set(p.scans)].join(', ')}]`).join(' ')}`;
 
 interface AnalysisRuns {
   ms: number[];
@@ -251,7 +251,7 @@ export async function run(): Promise<BenchSection> {
         'specimen ids begin with their material code (GEN-M07-0012345), as laboratory ids often do; a page plan that walks specimens_specimen_code_unique in order and filters assumes the matches are spread along that index, and here they sit together after every earlier material\'s ids (see "page" above)',
         withSeqScan.length ? `filters whose plans read specimens by Seq Scan: ${withSeqScan.join('; ')}` : 'no filtered plan reads specimens by Seq Scan',
         `analysis: n = ${analysis.n}, method ${analysis.method}, reply ${analysis.replyMB.toFixed(1)} MB; runs ${analysis.ms.map((m) => (m / 1000).toFixed(2)).join(', ')} s; health worst ${analysis.healthMaxMs.map((m) => m.toFixed(0)).join(', ')} ms (probe every 10 ms)`,
-        'the analyses service calls analyseDataGroup on the request thread (analyses.service.ts, store(); the statistics route POST /api/v1/statistics/basis uses runEngine and the worker pool), so the health route waits while a large analysis computes',
+        'the analyses service sends the engine work of a group above 500 values to the worker pool (runEngine in analyses.service.ts, store()); what stays on the request thread is reading the coupons, storing the analysis and writing its reply, which is what the health route waits for',
         `one-minute load average ${loadAtStart.toFixed(2)} at the start, ${os.loadavg()[0].toFixed(2)} at the end, on ${os.cpus().length} cores shared with other people's test stacks`,
       ],
     };

@@ -100,6 +100,9 @@ export const SORTABLE = {
 } as const;
 export type SortKey = keyof typeof SORTABLE;
 
+/** Sort columns that may be empty: their empty cells go last both ways. The others are NOT NULL, so a plain asc/desc lets one index serve both directions. */
+const NULLABLE_SORT = new Set<SortKey>(['strengthMpa', 'modulusMpa']);
+
 function filtered(db: Knex, filter: SpecimenFilter) {
   const q = db('specimens');
   if (filter.materialId) q.where('material_id', filter.materialId);
@@ -112,15 +115,19 @@ function filtered(db: Knex, filter: SpecimenFilter) {
   return q;
 }
 
-export async function selectSpecimenPage(db: Knex, filter: SpecimenFilter, sort: SortKey, descending: boolean, offset: number, limit: number) {
+export async function countSpecimens(db: Knex, filter: SpecimenFilter): Promise<number> {
   const [{ count }] = await filtered(db, filter).count<{ count: string }[]>('* as count');
-  const rows: SpecimenRow[] = await filtered(db, filter)
+  return Number(count);
+}
+
+export function selectSpecimenRows(db: Knex, filter: SpecimenFilter, sort: SortKey, descending: boolean, offset: number, limit: number): Promise<SpecimenRow[]> {
+  const direction = descending ? 'desc' : 'asc';
+  return filtered(db, filter)
     .select(db.raw(COLUMNS))
     // Qualified with the table: a bare test_date would sort by the to_char alias of COLUMNS (text), which no index serves.
-    .orderByRaw(`specimens.${SORTABLE[sort]} ${descending ? 'desc' : 'asc'} nulls last, specimens.id ${descending ? 'desc' : 'asc'}`)
+    .orderByRaw(`specimens.${SORTABLE[sort]} ${direction}${NULLABLE_SORT.has(sort) ? ' nulls last' : ''}, specimens.id ${direction}`)
     .offset(offset)
     .limit(limit);
-  return { total: Number(count), rows };
 }
 
 export async function selectSpecimen(db: Knex, id: number, forUpdate = false): Promise<SpecimenRow | undefined> {

@@ -12,7 +12,7 @@ import { conditionIndex, testMethodIndex } from '../materials/reference.service.
 import { actorOf, type Who } from '../shared/actor.ts';
 import { toSpecimen, toUpload, type CatalogueLabels } from './coupons.wire.ts';
 import {
-  selectGroupCounts, selectGroupValues, selectSpecimen, selectSpecimenPage, selectSpecimensByIds, updateSpecimenStatus,
+  countSpecimens, selectGroupCounts, selectGroupValues, selectSpecimen, selectSpecimenRows, selectSpecimensByIds, updateSpecimenStatus,
   type SortKey, type SpecimenFilter, type SpecimenRow,
 } from './specimens.queries.ts';
 import { selectUpload, selectUploadContent, selectUploads, selectUploadsByIds } from './uploads.queries.ts';
@@ -44,8 +44,12 @@ export interface SpecimenQuery extends SpecimenFilter {
 
 export async function listSpecimens(db: Knex, query: SpecimenQuery) {
   const { sort, descending, page, pageSize, ...filter } = query;
-  const { total, rows } = await selectSpecimenPage(db, filter, sort, descending, (page - 1) * pageSize, pageSize);
-  return { items: await describeSpecimens(db, rows), total, page, pageSize, pageCount: Math.max(1, Math.ceil(total / pageSize)) };
+  // The count (the slow part of a wide filter) runs beside the page and its labels, on its own connection.
+  const [total, items] = await Promise.all([
+    countSpecimens(db, filter),
+    selectSpecimenRows(db, filter, sort, descending, (page - 1) * pageSize, pageSize).then((rows) => describeSpecimens(db, rows)),
+  ]);
+  return { items, total, page, pageSize, pageCount: Math.max(1, Math.ceil(total / pageSize)) };
 }
 
 export async function getSpecimen(db: Knex, id: number) {
