@@ -37,6 +37,20 @@ describe('laminate engine: stacking code', function () {
     it(`parses ${code}`, () => expect(parseStackingCode(code)).to.deep.equal(angles));
   }
 
+  it('gives the place as a structured 0-based position too, the character the message counts from 1', () => {
+    const positionOf = (code: string) => {
+      try {
+        parseStackingCode(code);
+      } catch (err) {
+        return (err as InputError).problems[0].position;
+      }
+      throw new Error(`${code} parsed`);
+    };
+    expect(positionOf('0/45')).to.equal(0);
+    expect(positionOf('[0/x]')).to.equal(3);
+    expect(positionOf('[0/90]s2')).to.equal(7);
+  });
+
   it('says where and what was expected', () => {
     expect(parseError('0/45')).to.match(/position 1 .*expected '\[' to open the code but found '0'/);
     expect(parseError('[0/45')).to.match(/position 6 .*expected '\/' or '\]' but found the end of the code/);

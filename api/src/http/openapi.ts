@@ -20,7 +20,7 @@ export function buildOpenApiDocument(version: string, fragments: OpenApiFragment
           properties: {
             code: { type: 'string', description: 'stable identifier for programs, e.g. invalid_input, unauthenticated, forbidden' },
             message: { type: 'string', description: 'for people: names the field, the row and the fix' },
-            details: { description: 'structured detail; for invalid_input: { problems: [{ field, row?, message, fix? }] }' },
+            details: { description: 'structured detail; for invalid_input: { problems: [{ field, row?, position? (0-based character of the field\'s text), message, fix? }] }' },
           },
         },
       },

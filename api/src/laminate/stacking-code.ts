@@ -24,7 +24,7 @@ const BARS = new Set(['\u0305', '\u0304']);
 const SUBSCRIPT_DIGITS = '₀₁₂₃₄₅₆₇₈₉';
 
 function fail(code: string, at: number, message: string): never {
-  throw new InputError({ field: 'code', message: `position ${at + 1} of "${code}": ${message}`, fix: 'write the code like [0/±45/90]2s, [45/-45/0_2/90]s or [(0/90)2/45]T' });
+  throw new InputError({ field: 'code', position: at, message: `position ${at + 1} of "${code}": ${message}`, fix: 'write the code like [0/±45/90]2s, [45/-45/0_2/90]s or [(0/90)2/45]T' });
 }
 
 class CodeParser {

@@ -4,13 +4,16 @@
  * layer turns it into a 400 with the API error shape; the CLI into exit code 2.
  *
  * `field` is a path into the input (`plies[3].material.E2`, `values[12]`), `row`
- * a 1-based row of an uploaded file where there is one, and `fix` tells the user
- * what to change.
+ * a 1-based row of an uploaded file where there is one, `position` a 0-based
+ * character within the field's text where there is one, and `fix` tells the
+ * user what to change.
  */
 export interface InputProblem {
   field: string;
   message: string;
   row?: number;
+  /** 0-based character of the field's text the problem is at (a laminate code), so a client can mark it */
+  position?: number;
   fix?: string;
 }
 

@@ -5,6 +5,8 @@ export interface ApiProblem {
   readonly field: string;
   readonly message: string;
   readonly row?: number;
+  /** 0-based character of the field's text (a laminate code) */
+  readonly position?: number;
   readonly fix?: string;
 }
 
@@ -28,12 +30,7 @@ export function apiFailureOf(error: unknown): ApiFailure {
   return { message, problems, status: error.status };
 }
 
-/**
- * The 0-based character the stacking-code parser complains about: its messages
- * read `position N of "…": …` with N counted from 1 (api/src/laminate/stacking-code.ts).
- */
+/** The 0-based character of the laminate code the API's problem points at, if it names one. */
 export function codeErrorPosition(problem: ApiProblem): number | null {
-  if (problem.field !== 'code') return null;
-  const match = /position (\d+) of/.exec(problem.message);
-  return match ? Number(match[1]) - 1 : null;
+  return problem.field === 'code' && Number.isInteger(problem.position) ? problem.position! : null;
 }
