@@ -152,7 +152,7 @@ export async function run(): Promise<BenchSection> {
       request: { ...common, url: `${stack.apiUrl}${listPath}`, method: 'GET', headers: headersOf(s, false) },
     });
     // Floors of the stack under the same load: the public health route (no session, one select 1)
-    // and the signed-in GET /me (session read and touch, one small query), one run each.
+    // and the signed-in GET /me (session read, one small query), one run each.
     const healthLoaded = await floorUnderLoad({ ...common, url: `${stack.apiUrl}/api/v1/health` });
     const meLoaded = await floorUnderLoad({ ...common, url: `${stack.apiUrl}/api/v1/me`, headers: headersOf(s, false) });
     const engineMs = engineCpuMs();
@@ -177,8 +177,8 @@ export async function run(): Promise<BenchSection> {
         `floors under ${CONNECTIONS} connections, what this machine gives a route that does almost nothing: health (public) ${describeFloor(healthLoaded)}; GET /me (signed in) ${describeFloor(meLoaded)}`,
         describeRuns(laminate),
         describeRuns(coupons),
-        'each request passes sessions (a select and, with rolling cookies, an update of the sessions table), CSRF and the role guard; the health route is public and asks the database for select 1 through the same Knex pool (10 connections) as the coupon list',
-        `POST /laminates/analyze sends the engine work through runEngine (api/src/calculations/engine-runner.ts): ${engineThreads() ? `to the API's worker pool of ${engineThreads()} thread(s)` : 'inline on the request thread'} (PLYLEDGER_ENGINE_THREADS, default cores - 1); a 16-ply analysis is a fraction of a millisecond of engine time, so most of each request is the HTTP, session and reply work on the event loop, plus the copy of the result back from the worker`,
+        'each request passes sessions (a select; the idle expiry is written at most once a minute per session), CSRF and the role guard; the health route is public and asks the database for select 1 through the same Knex pool (10 connections) as the coupon list',
+        `POST /laminates/analyze goes through runEngineJson (api/src/calculations/engine-runner.ts): a stack of at most 64 plies (given as plies or as a code that expands to them) is analysed inline on the request thread, larger ones in the API's worker pool of ${engineThreads()} thread(s) (PLYLEDGER_ENGINE_THREADS, default cores - 1), which hands back the reply as JSON text; a 16-ply analysis is about 0.1 ms of engine time and its 32 kB reply about as long to serialise, so most of each request is the HTTP and session work on the event loop`,
         `the load generator, the probe, the API and PostgreSQL share ${os.cpus().length} cores with other people's test stacks: one-minute load average ${loadAtStart.toFixed(2)} at the start, ${os.loadavg()[0].toFixed(2)} at the end`,
       ],
     };
