@@ -40,7 +40,7 @@ async function side(db: Knex, label: 'a' | 'b', record: RevisionRecord, load: Re
   const laminate = laminateJsonOf(record.plies, record.laminae, settings);
   let analysis;
   try {
-    analysis = analyseLaminateJson(laminate, { codeGiven: null }, (i) => record.laminae[record.plies[i]?.laminaIndex]);
+    analysis = await analyseLaminateJson(laminate, { codeGiven: null }, (i) => record.laminae[record.plies[i]?.laminaIndex]);
   } catch (err) {
     if (!(err instanceof InputError)) throw err;
     throw new InputError(err.problems.map((p) => (p.field.startsWith('plies') ? { ...p, field: `${label}.${p.field}` } : { ...p, field: p.field.replace(/^settings\./, '') })));

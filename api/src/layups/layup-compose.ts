@@ -8,7 +8,8 @@
  * numbers of a revision never move when the catalogue does.
  */
 import type { Knex } from 'knex';
-import { analyseLaminate, parseLaminateInput, type LaminateAnalysis, type PlyMaterial } from '../laminate/index.ts';
+import { runEngine } from '../calculations/engine-runner.ts';
+import type { LaminateAnalysis, PlyMaterial } from '../laminate/index.ts';
 import { InputError, type InputProblem } from '../shared/input-error.ts';
 import { allowableUsage, laminaKey, resolveLamina, type ResolvedLamina } from './lamina-sources.ts';
 import type { DraftPly, LaminaChoice, LayupDraft, LayupSettings } from './layup-draft.ts';
@@ -112,10 +113,13 @@ function renameEngineProblem(problem: InputProblem, draft: Pick<LayupDraft, 'cod
   return { ...problem, field: `settings.${problem.field}` };
 }
 
-/** Runs the engine on a laminate JSON, naming problems in the designer's terms. */
-export function analyseLaminateJson(laminate: LaminateJson, draft: Pick<LayupDraft, 'codeGiven'>, laminaOfPly: (i: number) => ResolvedLamina | undefined): LaminateAnalysis {
+/**
+ * Runs the engine on a laminate JSON (through runEngine: inline for a short
+ * stack, in the worker pool for a long one), naming problems in the designer's terms.
+ */
+export async function analyseLaminateJson(laminate: LaminateJson, draft: Pick<LayupDraft, 'codeGiven'>, laminaOfPly: (i: number) => ResolvedLamina | undefined): Promise<LaminateAnalysis> {
   try {
-    return analyseLaminate(parseLaminateInput(laminate));
+    return await runEngine<LaminateAnalysis>('laminate.analyse', laminate);
   } catch (err) {
     if (err instanceof InputError) throw new InputError(err.problems.map((p) => renameEngineProblem(p, draft, laminaOfPly)));
     throw err;
@@ -139,7 +143,7 @@ export async function composeDraft(db: Knex, draft: LayupDraft): Promise<Composi
   });
   if (problems.length) throw new InputError(dedupe(problems).slice(0, 20));
   const laminate = laminateJsonOf(plies, laminae, draft.settings);
-  const analysis = analyseLaminateJson(laminate, draft, (i) => ofPly[i] ?? undefined);
+  const analysis = await analyseLaminateJson(laminate, draft, (i) => ofPly[i] ?? undefined);
   return {
     plies, laminae, settings: draft.settings, laminate, analysis,
     code: analysis.stackingCode, plyCount: plies.length, thicknessMm: analysis.thickness, usage: allowableUsage(laminae),

@@ -126,7 +126,7 @@ export async function revisionRecord(db: Knex, revisionId: number) {
 
 export async function getRevision(db: Knex, revisionId: number) {
   const record = await revisionRecord(db, revisionId);
-  const analysis = analyseLaminateJson(record.laminate, { codeGiven: null }, (i) => record.laminae[record.plies[i]?.laminaIndex]);
+  const analysis = await analyseLaminateJson(record.laminate, { codeGiven: null }, (i) => record.laminae[record.plies[i]?.laminaIndex]);
   const computed = toComputed({
     plies: record.plies, laminae: record.laminae, settings: record.row.settings, laminate: record.laminate, analysis,
     code: record.row.code, plyCount: record.row.ply_count, thicknessMm: record.row.thickness_mm, usage: record.usage,
