@@ -155,7 +155,7 @@ export function analyseConditions(data: ConditionsData, options: { needs: BasisN
     }
     override = { requested: options.method, automatic: automaticMethod, differs: options.method !== automaticMethod, against };
   }
-  warnings.push('basis values are given per condition, in byCondition; the top-level bBasis and aBasis are null');
+  warnings.push('conditions pooled: each condition has its own basis value (listed per condition, byCondition in the API); there is no single basis value for the pooled group');
   const levene = method === 'pooled-cv' ? pooled.leveneNormalised ?? undefined : leveneValues ?? undefined;
   return { perCondition, byCondition, method, automaticMethod, decision, batchEquivalence, levene, pooled, modifiedCv: options.modifiedCv ? modifiedCv : undefined, override, warnings };
 }
