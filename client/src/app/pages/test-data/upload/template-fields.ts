@@ -2,7 +2,8 @@
  * The columns of Plyledger's coupon template, as the client needs them to map
  * a file's headers and to check its first rows before sending. The server's
  * list (api/src/coupons/csv-template.ts) is the rule; the server checks every
- * row again and its answer is what counts.
+ * row again and its answer is what counts. test/api/upload-template-agreement.test.ts
+ * fails when this copy and the server's list part.
  */
 
 export type FieldKind = 'text' | 'number' | 'integer' | 'date';
