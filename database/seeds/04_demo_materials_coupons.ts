@@ -1,5 +1,6 @@
 import { createHash } from 'node:crypto';
 import type { Knex } from 'knex';
+import { fileSourceFromBuffer } from '../../api/src/coupons/coupon-file-source.ts';
 import { importCouponFile } from '../../api/src/coupons/import.service.ts';
 import { createMaterial, materialsByCode } from '../../api/src/materials/materials.service.ts';
 import type { SessionUser } from '../../api/src/http/request-user.ts';
@@ -35,5 +36,5 @@ export async function seed(knex: Knex): Promise<void> {
   const sha256 = createHash('sha256').update(csv).digest('hex');
   if (await knex('uploads').where({ sha256 }).first('id')) return;
   if (await knex('uploads').where({ file_name: DEMO_FILE_NAME, invented: true }).first('id')) return;
-  await importCouponFile(knex, who, { fileName: DEMO_FILE_NAME, content: Buffer.from(csv, 'utf8') }, { invented: true });
+  await importCouponFile(knex, who, { fileName: DEMO_FILE_NAME, source: fileSourceFromBuffer(Buffer.from(csv, 'utf8')) }, { invented: true });
 }

@@ -73,7 +73,7 @@ export async function upload(content: string | Buffer, options: { login?: string
 export async function importTableCounts() {
   const db = testDb();
   const count = async (table: string) => Number((await db(table).count('* as n').first())!.n);
-  return { specimens: await count('specimens'), uploads: await count('uploads'), batches: await count('batches'), panels: await count('panels') };
+  return { specimens: await count('specimens'), uploads: await count('uploads'), uploadChunks: await count('upload_chunks'), batches: await count('batches'), panels: await count('panels') };
 }
 
 export async function postJson(login: string, path: string, json: unknown, method = 'POST') {

@@ -46,6 +46,7 @@ describe('coupon upload: template and good files', function () {
     const after = await importTableCounts();
     expect(after.specimens - before.specimens).to.equal(12);
     expect(after.uploads - before.uploads).to.equal(1);
+    expect(after.uploadChunks - before.uploadChunks, 'a small file is one stored piece').to.equal(1);
     expect(after.batches - before.batches).to.equal(3);
     expect(after.panels - before.panels).to.equal(3);
     const stored = await testDb()('specimens').where({ upload_id: body.upload.id }).orderBy('upload_row').first();

@@ -3,6 +3,8 @@
  * engineers), the upload records and stored files, the paged coupon table, and
  * excluding or restoring a coupon with a reason (materials engineers).
  */
+import { Readable } from 'node:stream';
+import { pipeline } from 'node:stream/promises';
 import { Router } from 'express';
 import type { Knex } from 'knex';
 import { requireRole } from '../auth/require-role.ts';
@@ -15,7 +17,7 @@ import { FORCE_UNITS, LENGTH_UNITS, SI_UNITS, STRESS_UNITS, US_UNITS, type Uploa
 import { importCouponFile } from './import.service.ts';
 import { SORTABLE, type SortKey } from './specimens.queries.ts';
 import { changeSpecimenStatus, dataGroupCounts, getSpecimen, getUpload, listSpecimens, listUploads, uploadFile } from './specimens.service.ts';
-import { fileNameOf, receiveCouponFile } from './upload-middleware.ts';
+import { discardReceivedFile, fileNameOf, receiveCouponFile, receivedFileSource } from './upload-middleware.ts';
 
 export const COUPON_EDITORS = ['materials-engineer'] as const;
 
@@ -54,11 +56,15 @@ export function couponsRouter(db: Knex): Router {
   });
 
   router.post('/uploads', requireRole(...COUPON_EDITORS), receiveCouponFile, async (req, res) => {
-    if (!req.file) throw badRequest('The form has no file; send the CSV in the field "file"', { problems: [{ field: 'file', message: 'missing', fix: 'choose a CSV file' }] });
-    const mapping = readMapping(req.body?.columns);
-    const units = readUnits(req.body);
-    const result = await importCouponFile(db, req, { fileName: fileNameOf(req.file.originalname), content: req.file.buffer, contentType: req.file.mimetype }, { mapping, units });
-    res.status(201).json(result);
+    try {
+      if (!req.file) throw badRequest('The form has no file; send the CSV in the field "file"', { problems: [{ field: 'file', message: 'missing', fix: 'choose a CSV file' }] });
+      const mapping = readMapping(req.body?.columns);
+      const units = readUnits(req.body);
+      const result = await importCouponFile(db, req, { fileName: fileNameOf(req.file.originalname), source: receivedFileSource(req.file), contentType: req.file.mimetype }, { mapping, units });
+      res.status(201).json(result);
+    } finally {
+      await discardReceivedFile(req);
+    }
   });
 
   router.get('/uploads', async (req, res) => {
@@ -73,7 +79,13 @@ export function couponsRouter(db: Knex): Router {
   });
   router.get('/uploads/:id/file', async (req, res) => {
     const file = await uploadFile(db, readId(req.params.id));
-    res.type(file.contentType || 'text/csv').attachment(file.fileName).send(file.content);
+    res.type(file.contentType || 'text/csv').attachment(file.fileName).set('Content-Length', String(file.sizeBytes));
+    try {
+      // one stored piece at a time; pipeline destroys the response if a piece cannot be read, so a cut file never looks whole
+      await pipeline(Readable.from(file.chunks()), res);
+    } catch (err) {
+      if ((err as NodeJS.ErrnoException).code !== 'ERR_STREAM_PREMATURE_CLOSE') throw err; // the client went away
+    }
   });
 
   router.get('/specimens', async (req, res) => {

@@ -1,8 +1,11 @@
 /**
- * The rows of a CSV text, one at a time, as an async iterator: papaparse reads
- * the text in chunks and pauses after each until the consumer (which awaits
- * database inserts between batches) asks for more, so the rows of a large file
- * are never all held at once.
+ * The rows of a CSV text, one at a time, as an async iterator, from a stream of
+ * text chunks: each chunk is parsed by papaparse's parser as it arrives, and
+ * the line it ends in the middle of (or a quoted cell that goes on into the
+ * next chunk) is carried over and parsed again with the next one, as
+ * papaparse's own chunk streamer does. The next chunk is only read when the
+ * consumer (which awaits database inserts between batches) asks for more rows,
+ * so neither the text nor the rows of a large file are ever all held at once.
  */
 import Papa from 'papaparse';
 
@@ -12,48 +15,33 @@ export interface CsvRecord {
   cells: string[];
 }
 
-const CHUNK_CHARACTERS = 256 * 1024;
+/** papaparse's guess of the line ending (\r\n, \n or \r) from the first text, as Papa.parse makes it (ParserHandle is not in its type definitions). */
+function guessLineEnding(text: string): string {
+  const { ParserHandle } = Papa as unknown as { ParserHandle: new (config: object) => { guessLineEndings(input: string, quoteChar: string): string } };
+  return new ParserHandle({}).guessLineEndings(text, '"');
+}
 
-export async function* csvRecords(text: string): AsyncGenerator<CsvRecord> {
-  const chunks: string[][][] = [];
+export async function* csvRecords(chunks: AsyncIterable<string>): AsyncGenerator<CsvRecord> {
   let parser: Papa.Parser | undefined;
-  let finished = false;
-  let wake: (() => void) | undefined;
-  Papa.parse<string[]>(text, {
-    delimiter: ',',
-    header: false,
-    skipEmptyLines: false,
-    chunkSize: CHUNK_CHARACTERS,
-    chunk: (results: Papa.ParseResult<string[]>, handle: Papa.Parser) => {
-      chunks.push(results.data);
-      parser = handle;
-      handle.pause();
-      wake?.();
-    },
-    complete: () => {
-      finished = true;
-      wake?.();
-    },
-  });
+  let carried = '';
   let row = 0;
-  try {
-    while (true) {
-      const chunk = chunks.shift();
-      if (chunk) {
-        for (const cells of chunk) {
-          row++;
-          yield { row, cells };
-        }
-        if (!finished) parser?.resume();
-        continue;
-      }
-      if (finished) return;
-      await new Promise<void>((resolve) => (wake = resolve));
-      wake = undefined;
+  const parse = (text: string, final: boolean) => {
+    parser ??= new Papa.Parser({ delimiter: ',', newline: guessLineEnding(text) as Papa.ParseConfig['newline'], quoteChar: '"' });
+    // cursor: where the rows it returned end; past it is the unfinished line (none when final)
+    const results = parser.parse(text, 0, !final) as Papa.ParseResult<string[]>;
+    carried = final ? '' : text.slice(results.meta.cursor);
+    return results.data;
+  };
+  for await (const chunk of chunks) {
+    // the line ending is guessed once the text holds one whole (a \r may be the start of \r\n)
+    if (!parser && !/\n|\r[^]/.test(carried + chunk)) {
+      carried += chunk;
+      continue;
     }
-  } finally {
-    // the consumer stopped early (row limit, error): let the parser go
-    if (!finished) parser?.abort();
+    for (const cells of parse(carried + chunk, false)) yield { row: ++row, cells };
+  }
+  if (carried || !parser) {
+    for (const cells of parse(carried, true)) yield { row: ++row, cells };
   }
 }
 

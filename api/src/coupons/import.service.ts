@@ -4,14 +4,20 @@
  * one transaction, all or nothing, with the file and its SHA-256.
  *
  * Shape of the work, for large files (a benchmark pushes 100 000 rows): the
- * rows are parsed as a stream (csv-stream.ts) and inserted in batches of
- * INSERT_BATCH coupons, one statement each, inside the one transaction; the
- * upload row (which needs the final row count) is written last, its id
- * reserved first and the coupons' foreign key to it deferred to the commit.
- * After the first problem nothing more is inserted, but every row is still
- * read so that all problems are reported at once.
- * The file is held in memory (at most MAX_UPLOAD_BYTES): it is stored in the
- * same transaction, and its checksum is known before any row is read.
+ * file is never held whole; it is read from its source (a temporary file for
+ * the route, coupon-file-source.ts) as a stream, three times:
+ * 1. before the transaction, the file checks (csv-file-checks.ts) and the
+ *    SHA-256, so a bad or already imported file is refused before any row;
+ * 2. in the transaction, the rows, parsed chunk by chunk (csv-stream.ts) and
+ *    inserted in batches of INSERT_BATCH coupons, one statement each;
+ * 3. once every row is good, the file itself, in UPLOAD_CHUNK_BYTES pieces
+ *    (upload_chunks), in the same transaction.
+ * The upload row (which needs the final row count) is written last, its id
+ * reserved first and the coupons' and chunks' foreign keys to it deferred to
+ * the commit. After the first problem nothing more is inserted, but every row
+ * is still read so that all problems are reported at once. Memory is bounded
+ * by a read chunk, one parsed chunk of rows, an insert batch and one stored
+ * chunk, not by the size of the file.
  */
 import { createHash } from 'node:crypto';
 import type { Knex } from 'knex';
@@ -20,7 +26,8 @@ import { batchAndPanelKeys, listMaterials, registerBatches, registerPanels } fro
 import { conditionIndex, listTestProperties, testMethodIndex } from '../materials/reference.service.ts';
 import { actorOf, type Who } from '../shared/actor.ts';
 import { isUniqueViolation } from '../shared/database-errors.ts';
-import { decodeCouponFile } from './csv-file-checks.ts';
+import { fixedSizeChunks, type CouponFileSource } from './coupon-file-source.ts';
+import { checkCouponFile, couponFileText } from './csv-file-checks.ts';
 import { readHeader } from './csv-header.ts';
 import { CsvImportError, ProblemCollector } from './csv-problems.ts';
 import { couponRowReader, type RowCatalogue, type SpecimenDraft } from './csv-rows.ts';
@@ -28,15 +35,17 @@ import { csvRecords, isBlank } from './csv-stream.ts';
 import type { UploadUnits } from './csv-units.ts';
 import { toUpload } from './coupons.wire.ts';
 import { insertSpecimenBatch, selectStoredCodes, type ResolvedDraft } from './specimens.queries.ts';
-import { deferUploadReference, insertUpload, reserveUploadId, selectUploadBySha } from './uploads.queries.ts';
+import { deferUploadReference, insertUpload, insertUploadChunk, reserveUploadId, selectUploadBySha } from './uploads.queries.ts';
 
 export const MAX_UPLOAD_BYTES = 25 * 1024 * 1024;
 export const MAX_UPLOAD_ROWS = 150_000;
 const INSERT_BATCH = 2000;
+/** Size of the stored pieces of a file (upload_chunks; the migration that moved the files into chunks uses the same). */
+export const UPLOAD_CHUNK_BYTES = 1024 * 1024;
 
 export interface CouponFile {
   fileName: string;
-  content: Buffer;
+  source: CouponFileSource;
   contentType?: string;
 }
 
@@ -145,9 +154,12 @@ function readRecord(state: ImportState, readRow: RowReader, fieldCount: number, 
 
 export async function importCouponFile(db: Knex, who: Who, file: CouponFile, options: ImportOptions = {}) {
   const actor = actorOf(who);
-  if (file.content.length > MAX_UPLOAD_BYTES) throw tooLargeError(file.content.length);
-  const text = decodeCouponFile(file.content);
-  const sha256 = createHash('sha256').update(file.content).digest('hex');
+  const { source } = file;
+  if (source.size > MAX_UPLOAD_BYTES) throw tooLargeError(source.size);
+  // pass 1: the checks on the file as a whole, and its checksum, in one read
+  const hash = createHash('sha256');
+  await checkCouponFile(source, (chunk) => hash.update(chunk));
+  const sha256 = hash.digest('hex');
   const duplicateOf = (earlier: Awaited<ReturnType<typeof selectUploadBySha>>) =>
     new CsvImportError(409, 'csv_duplicate_file', `This file was imported already (upload ${earlier?.id}, ${earlier?.file_name}); nothing was imported again`,
       [{ field: 'file', code: 'duplicate_file', message: 'a file with the same SHA-256 is stored already', fix: 'nothing to do if it is the same results; otherwise check you chose the right file' }],
@@ -166,7 +178,8 @@ export async function importCouponFile(db: Knex, who: Who, file: CouponFile, opt
       let header: ReturnType<typeof readHeader> | undefined;
       let columnOf: (field: string) => string | undefined = () => undefined;
       let readRow: RowReader | undefined;
-      for await (const { row, cells } of csvRecords(text)) {
+      // pass 2: the rows
+      for await (const { row, cells } of csvRecords(couponFileText(source))) {
         if (isBlank(cells)) continue;
         if (!header) {
           header = readHeader(cells, options.mapping ?? {}, options.units ?? {});
@@ -197,13 +210,15 @@ export async function importCouponFile(db: Knex, who: Who, file: CouponFile, opt
           state.problems.list);
       }
       const columns = header.columns;
+      // pass 3: the file as received, in pieces
+      let seq = 0;
+      for await (const bytes of fixedSizeChunks(source, UPLOAD_CHUNK_BYTES)) await insertUploadChunk(trx, uploadId, seq++, bytes);
       const upload = await insertUpload(trx, {
         id: uploadId,
         file_name: file.fileName,
         sha256,
-        size_bytes: file.content.length,
+        size_bytes: source.size,
         row_count: state.dataRows,
-        content: file.content,
         content_type: file.contentType ?? 'text/csv',
         column_mapping: Object.fromEntries(columns.map((c) => [c.field.field, c.header])),
         units: Object.fromEntries(columns.filter((c) => c.unit).map((c) => [c.field.field, c.unit])),

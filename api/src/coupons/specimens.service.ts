@@ -15,7 +15,7 @@ import {
   countSpecimens, selectGroupCounts, selectGroupValues, selectSpecimen, selectSpecimenRows, selectSpecimensByIds, updateSpecimenStatus,
   type SortKey, type SpecimenFilter, type SpecimenRow,
 } from './specimens.queries.ts';
-import { selectUpload, selectUploadContent, selectUploads, selectUploadsByIds } from './uploads.queries.ts';
+import { selectUpload, selectUploadChunkAfter, selectUploadFile, selectUploads, selectUploadsByIds } from './uploads.queries.ts';
 
 async function labelsFor(db: Knex, rows: SpecimenRow[]): Promise<CatalogueLabels> {
   const [catalogue, methods, conditions] = await Promise.all([
@@ -91,10 +91,23 @@ export async function getUpload(db: Knex, id: number) {
   return toUpload(row);
 }
 
+/**
+ * A stored file, byte for byte as uploaded: its name and type, and its bytes as
+ * the stored pieces in order, each read from the database when the previous
+ * one has been taken (a file is never held whole; stored files never change).
+ */
 export async function uploadFile(db: Knex, id: number) {
-  const file = await selectUploadContent(db, id);
+  const file = await selectUploadFile(db, id);
   if (!file) throw notFound(`Upload ${id}`);
-  return { fileName: file.file_name, contentType: file.content_type, content: file.content };
+  async function* chunks(): AsyncGenerator<Buffer> {
+    for (let seq = -1; ;) {
+      const chunk = await selectUploadChunkAfter(db, id, seq);
+      if (!chunk) return;
+      seq = chunk.seq;
+      yield chunk.bytes;
+    }
+  }
+  return { fileName: file.file_name, contentType: file.content_type, sizeBytes: Number(file.size_bytes), chunks };
 }
 
 // ---- for other domains (analyses, allowables, ply property sets) ----

@@ -1,19 +1,44 @@
 /**
- * Receiving an upload: multer (memory storage, one file, small fields) with
- * the size limit applied twice: the declared Content-Length is refused before
- * a byte of the body is read, and multer stops a body that turns out larger.
+ * Receiving an upload: multer (disk storage, one file, small fields) with the
+ * size limit applied twice: the declared Content-Length is refused before a
+ * byte of the body is read, and multer stops a body that turns out larger.
  * Both give the import's own 413 error (csv_too_large).
+ *
+ * The file goes to a temporary file in a private folder (UPLOAD_TEMP_DIR, mode
+ * 0700), never into memory: the import reads it from there as a stream. It is
+ * removed when the request is done, whatever the answer: by the route once the
+ * import has finished (discardReceivedFile), again (a no-op) when the response
+ * closes, and by multer itself when it refuses the body part way.
  */
-import type { RequestHandler } from 'express';
+import { randomUUID } from 'node:crypto';
+import { chmod, mkdir, rm } from 'node:fs/promises';
+import os from 'node:os';
+import path from 'node:path';
+import type { Request, RequestHandler } from 'express';
 import multer from 'multer';
 import { badRequest } from '../http/errors.ts';
+import { fileSourceFromPath, type CouponFileSource } from './coupon-file-source.ts';
 import { MAX_UPLOAD_BYTES, tooLargeError } from './import.service.ts';
+
+export const UPLOAD_TEMP_DIR = path.join(os.tmpdir(), 'plyledger-uploads');
+
+/** Temporary files are named after the process (several API processes may share the folder) and a random id. */
+export const TEMP_FILE_PREFIX = `${process.pid}-`;
 
 /** Room for the multipart envelope and the form fields around the file. */
 const ENVELOPE_BYTES = 256 * 1024;
 
+const storage = multer.diskStorage({
+  destination: (_req, _file, done) => {
+    mkdir(UPLOAD_TEMP_DIR, { recursive: true, mode: 0o700 })
+      .then(() => chmod(UPLOAD_TEMP_DIR, 0o700)) // made private even if it was there already
+      .then(() => done(null, UPLOAD_TEMP_DIR), (err: Error) => done(err, UPLOAD_TEMP_DIR));
+  },
+  filename: (_req, _file, done) => done(null, `${TEMP_FILE_PREFIX}${randomUUID()}.upload`),
+});
+
 const receive = multer({
-  storage: multer.memoryStorage(),
+  storage,
   limits: { fileSize: MAX_UPLOAD_BYTES, files: 1, fields: 10, fieldSize: 64 * 1024, parts: 12 },
 }).single('file');
 
@@ -24,7 +49,10 @@ export const receiveCouponFile: RequestHandler = (req, res, next) => {
     return next(badRequest('Send the file as multipart/form-data with the field "file"', { problems: [{ field: 'file', message: 'no multipart body', fix: 'post a form with the CSV file in the field "file"' }] }));
   }
   receive(req, res, (err?: unknown) => {
-    if (!err) return next();
+    if (!err) {
+      res.once('close', () => void discardReceivedFile(req));
+      return next();
+    }
     const e = err as { code?: string; field?: string };
     if (e.code === 'LIMIT_FILE_SIZE') return next(tooLargeError());
     if (e.code === 'LIMIT_UNEXPECTED_FILE') return next(badRequest(`Send one file, in the field "file" (got field "${e.field}")`, { problems: [{ field: e.field ?? 'file', message: 'unexpected file field', fix: 'name the form field "file" and send one file' }] }));
@@ -39,4 +67,16 @@ export function fileNameOf(original: string): string {
   const utf8 = Buffer.from(original, 'latin1').toString('utf8');
   const name = utf8.includes('\uFFFD') ? original : utf8;
   return name.replace(/[\\/]/g, '_').slice(0, 255) || 'upload.csv';
+}
+
+/** The received file as the import reads it. */
+export function receivedFileSource(file: Express.Multer.File): CouponFileSource {
+  return fileSourceFromPath(file.path, file.size);
+}
+
+/** Removes the request's temporary file (a no-op when it is gone already); never throws, so it cannot hide the answer. */
+export async function discardReceivedFile(req: Request): Promise<void> {
+  if (!req.file?.path) return;
+  const file = req.file.path;
+  await rm(file, { force: true }).catch((err: Error) => req.log?.warn({ file, reason: err.message }, 'upload: temporary file not removed'));
 }

@@ -1,4 +1,4 @@
-/** SQL on uploads (the stored file is only read by the download route). */
+/** SQL on uploads and their stored files (upload_chunks, only read by the download route, one chunk at a time). */
 import type { Knex } from 'knex';
 
 export interface UploadRow {
@@ -26,10 +26,15 @@ export async function reserveUploadId(db: Knex): Promise<number> {
 }
 
 export async function deferUploadReference(db: Knex): Promise<void> {
-  await db.raw('set constraints specimens_upload_fk deferred');
+  await db.raw('set constraints specimens_upload_fk, upload_chunks_upload_fk deferred');
 }
 
-export async function insertUpload(db: Knex, row: Omit<UploadRow, 'uploaded_at' | 'content_type'> & { content: Buffer; content_type?: string }): Promise<UploadRow> {
+/** One piece of the stored file; `seq` counts from 0 in the order of the bytes. */
+export async function insertUploadChunk(db: Knex, uploadId: number, seq: number, bytes: Buffer): Promise<void> {
+  await db('upload_chunks').insert({ upload_id: uploadId, seq, bytes });
+}
+
+export async function insertUpload(db: Knex, row: Omit<UploadRow, 'uploaded_at' | 'content_type'> & { content_type?: string }): Promise<UploadRow> {
   const [inserted] = await db('uploads')
     .insert({ ...row, column_mapping: JSON.stringify(row.column_mapping), units: JSON.stringify(row.units), created_catalogue: JSON.stringify(row.created_catalogue) })
     .returning(SUMMARY_COLUMNS);
@@ -54,6 +59,11 @@ export function selectUploads(db: Knex, limit: number, beforeId?: number): Promi
   return q;
 }
 
-export function selectUploadContent(db: Knex, id: number): Promise<{ file_name: string; content_type: string; content: Buffer } | undefined> {
-  return db('uploads').where({ id }).first('file_name', 'content_type', 'content');
+export function selectUploadFile(db: Knex, id: number): Promise<{ file_name: string; content_type: string; size_bytes: string | number } | undefined> {
+  return db('uploads').where({ id }).first('file_name', 'content_type', 'size_bytes');
+}
+
+/** The stored piece after `afterSeq` (-1 for the first), or undefined past the last. */
+export async function selectUploadChunkAfter(db: Knex, uploadId: number, afterSeq: number): Promise<{ seq: number; bytes: Buffer } | undefined> {
+  return db('upload_chunks').where({ upload_id: uploadId }).andWhere('seq', '>', afterSeq).orderBy('seq').first('seq', 'bytes');
 }

@@ -45,10 +45,15 @@ async function generateCatalogue(trx: Knex, userId: number) {
     select ms.id, ${code('B', 'b', 2)} from material_systems ms cross join generate_series(1, ${FOCUS_GROUP.batches}) b where ms.code like 'GEN-M%'`);
   await trx.raw(`insert into panels (batch_id, code)
     select ba.id, format('P%s', p) from batches ba join material_systems ms on ms.id = ba.material_id cross join generate_series(1, 5) p where ms.code like 'GEN-M%'`);
-  await trx.raw(`insert into uploads (file_name, sha256, size_bytes, row_count, content, invented, uploaded_by, uploaded_by_name)
-    select format('generated-%s.csv', u), md5('generated ' || u) || md5('upload ' || u), octet_length(convert_to('generated upload ' || u, 'UTF8')),
-      ${GENERATED_COUPONS / UPLOADS}, convert_to('generated upload ' || u, 'UTF8'), true, ?, 'bench generator'
-    from generate_series(1, ${UPLOADS}) u`, [userId]);
+  // each upload's stored file is one piece (upload_chunks), written with it
+  await trx.raw(`with made as (
+      insert into uploads (file_name, sha256, size_bytes, row_count, invented, uploaded_by, uploaded_by_name)
+      select format('generated-%s.csv', u), md5('generated ' || u) || md5('upload ' || u), octet_length(convert_to('generated upload ' || u, 'UTF8')),
+        ${GENERATED_COUPONS / UPLOADS}, true, ?, 'bench generator'
+      from generate_series(1, ${UPLOADS}) u
+      returning id, file_name)
+    insert into upload_chunks (upload_id, seq, bytes)
+    select id, 0, convert_to('generated upload ' || substring(file_name from 'generated-([0-9]+)[.]csv'), 'UTF8') from made`, [userId]);
 }
 
 async function generateCoupons(trx: Knex, userId: number): Promise<boolean> {
