@@ -11,6 +11,7 @@ import { createApp } from './app.ts';
 import { createOidcClient } from './auth/oidc-client.ts';
 import { setEngineThreads } from './calculations/engine-runner.ts';
 import { loadConfig, type Config } from './config.ts';
+import { sweepStaleUploads } from './coupons/upload-middleware.ts';
 import { createDb } from './db.ts';
 
 export interface RunningApi {
@@ -28,6 +29,8 @@ export async function startApi(config: Config = loadConfig()): Promise<RunningAp
   // An idle connection cut by a database restart must not crash the process.
   pool.on('error', (err) => logger.warn({ reason: err.message }, 'session pool connection lost'));
   const { app } = createApp({ config, db, pool, oidc: createOidcClient(config), logger });
+  // Temporary upload files left by a process that stopped mid-upload.
+  void sweepStaleUploads().then((n) => n && logger.info({ removed: n }, 'removed stale temporary upload files'));
   const server: Server = await new Promise((resolve, reject) => {
     const s = app.listen(config.apiPort, config.apiHost, () => resolve(s));
     s.once('error', (err: NodeJS.ErrnoException) =>

@@ -7,14 +7,16 @@
  */
 import { expect } from 'chai';
 import { createHash } from 'node:crypto';
-import { readdir, stat } from 'node:fs/promises';
+import { existsSync } from 'node:fs';
+import { mkdir, readdir, rm, stat, utimes, writeFile } from 'node:fs/promises';
+import path from 'node:path';
 import Papa from 'papaparse';
 import { fileSourceFromBuffer } from '../../api/src/coupons/coupon-file-source.ts';
 import { checkCouponFile, couponFileText } from '../../api/src/coupons/csv-file-checks.ts';
 import { CsvImportError } from '../../api/src/coupons/csv-problems.ts';
 import { csvRecords } from '../../api/src/coupons/csv-stream.ts';
 import { importCouponFile, MAX_UPLOAD_BYTES, UPLOAD_CHUNK_BYTES } from '../../api/src/coupons/import.service.ts';
-import { TEMP_FILE_PREFIX, UPLOAD_TEMP_DIR } from '../../api/src/coupons/upload-middleware.ts';
+import { STALE_UPLOAD_MS, sweepStaleUploads, TEMP_FILE_PREFIX, UPLOAD_TEMP_DIR } from '../../api/src/coupons/upload-middleware.ts';
 import type { SessionUser } from '../../api/src/http/request-user.ts';
 import { testDb } from '../support/stack.ts';
 import { couponRows, createMaterial, csvOf, importTableCounts, session, upload } from './coupon-chain-helpers.ts';
@@ -184,5 +186,25 @@ describe('coupon upload streamed: stored pieces, download, temporary files', fun
     expect(failure?.code, 'a foreign-key violation').to.equal('23503');
     expect(failure?.constraint, 'on the upload row (written after the pieces)').to.match(/uploaded_by/);
     expect(await importTableCounts(), 'nothing stored').to.deep.equal(before);
+  });
+});
+
+describe('temporary upload files left by a stopped process', () => {
+  it('are removed when older than the limit; a file of a request in flight (recent) is kept', async () => {
+    await mkdir(UPLOAD_TEMP_DIR, { recursive: true, mode: 0o700 });
+    const old = path.join(UPLOAD_TEMP_DIR, `999999-stale-${Date.now()}.upload`);
+    const fresh = path.join(UPLOAD_TEMP_DIR, `999999-fresh-${Date.now()}.upload`);
+    await writeFile(old, 'left behind');
+    await writeFile(fresh, 'in flight');
+    const hoursAgo = new Date(Date.now() - 2 * STALE_UPLOAD_MS);
+    await utimes(old, hoursAgo, hoursAgo);
+    try {
+      expect(await sweepStaleUploads()).to.be.at.least(1);
+      expect(existsSync(old), 'the stale file').to.equal(false);
+      expect(existsSync(fresh), 'the recent file').to.equal(true);
+    } finally {
+      await rm(fresh, { force: true });
+      await rm(old, { force: true });
+    }
   });
 });

@@ -11,7 +11,7 @@
  * closes, and by multer itself when it refuses the body part way.
  */
 import { randomUUID } from 'node:crypto';
-import { chmod, mkdir, rm } from 'node:fs/promises';
+import { chmod, mkdir, readdir, rm, stat } from 'node:fs/promises';
 import os from 'node:os';
 import path from 'node:path';
 import type { Request, RequestHandler } from 'express';
@@ -79,4 +79,27 @@ export async function discardReceivedFile(req: Request): Promise<void> {
   if (!req.file?.path) return;
   const file = req.file.path;
   await rm(file, { force: true }).catch((err: Error) => req.log?.warn({ file, reason: err.message }, 'upload: temporary file not removed'));
+}
+
+/** Temporary files older than this are left over from a process that stopped mid-upload. */
+export const STALE_UPLOAD_MS = 3600_000;
+
+/**
+ * Removes temporary upload files older than `maxAgeMs` (any process's: a file
+ * that old belongs to no request in flight, since a request is cut long
+ * before). Run when an API process starts; returns how many it removed.
+ */
+export async function sweepStaleUploads(maxAgeMs = STALE_UPLOAD_MS, now = Date.now()): Promise<number> {
+  const names = await readdir(UPLOAD_TEMP_DIR).catch(() => [] as string[]);
+  let removed = 0;
+  for (const name of names) {
+    if (!name.endsWith('.upload')) continue;
+    const file = path.join(UPLOAD_TEMP_DIR, name);
+    const info = await stat(file).catch(() => undefined);
+    if (info && now - info.mtimeMs > maxAgeMs) {
+      await rm(file, { force: true }).catch(() => undefined);
+      removed++;
+    }
+  }
+  return removed;
 }
