@@ -4,7 +4,7 @@
  */
 import { expect } from 'chai';
 import { testDb } from '../support/stack.ts';
-import { couponRows, createMaterial, csvOf, getJson, postJson, upload } from './coupon-chain-helpers.ts';
+import { couponRows, createMaterial, csvOf, getJson, postJson, uniqueCode, upload } from './coupon-chain-helpers.ts';
 
 describe('coupon table: paging, sorting, filters, exclusion', function () {
   this.timeout(30_000);
@@ -73,5 +73,18 @@ describe('coupon table: paging, sorting, filters, exclusion', function () {
     const audit = await testDb()('audit_log').where({ entity_type: 'specimen', entity_id: String(id) }).orderBy('id');
     expect(audit.map((a) => `${a.action}:${a.details.reason}`)).to.deep.equal(['specimen.excluded:failed in the grip', 'specimen.restored:grip failure was in a different coupon']);
     expect((await postJson('designer', `/api/v1/specimens/${id}/exclude`, { reason: 'x' })).status).to.equal(403);
+  });
+
+  it('names a condition and a test method added after the table was read (reference codes read again for an id not seen)', async () => {
+    expect((await getJson('designer', `/api/v1/specimens?material=${material.id}&pageSize=5`)).status).to.equal(200);
+    const condition = uniqueCode('HW').slice(0, 18);
+    const method = uniqueCode('ISO').slice(0, 30);
+    expect((await postJson('admin', '/api/v1/conditions', { code: condition, label: 'Hot wet, later', temperatureC: 90, moistureState: 'wet' })).status).to.equal(201);
+    expect((await postJson('admin', '/api/v1/test-methods', { code: method, standardRef: 'ISO 527-5', title: 'Tension, added later', properties: [{ property: 'tension-0', dominance: 'fibre-dominated' }] })).status).to.equal(201);
+    const res = await upload(csvOf(couponRows(material.code, { prefix: 'LATER', batches: 1, perBatch: 2, condition, testMethod: method })));
+    expect(res.status, JSON.stringify(res.body)).to.equal(201);
+    const page = await getJson('designer', `/api/v1/specimens?upload=${res.body.upload.id}`);
+    expect(page.body.items.map((s: { condition: { code: string } }) => s.condition.code)).to.deep.equal([condition, condition]);
+    expect(page.body.items.map((s: { testMethod: { code: string } }) => s.testMethod.code)).to.deep.equal([method, method]);
   });
 });

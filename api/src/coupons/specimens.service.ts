@@ -17,17 +17,37 @@ import {
 } from './specimens.queries.ts';
 import { selectUpload, selectUploadChunkAfter, selectUploadFile, selectUploads, selectUploadsByIds } from './uploads.queries.ts';
 
-async function labelsFor(db: Knex, rows: SpecimenRow[]): Promise<CatalogueLabels> {
-  const [catalogue, methods, conditions] = await Promise.all([
-    catalogueLabels(db, { batchIds: rows.map((r) => r.batch_id), panelIds: rows.flatMap((r) => (r.panel_id === null ? [] : [r.panel_id])) }),
-    testMethodIndex(db),
-    conditionIndex(db),
-  ]);
-  return {
-    ...catalogue,
+interface ReferenceCodes {
+  testMethods: Map<number, string>;
+  conditions: Map<number, string>;
+}
+
+/**
+ * Codes of test methods and conditions by id, kept per database handle: the
+ * reference lists only grow (reference.service.ts creates, nothing renames or
+ * deletes), so a code once read stays right, and a page that shows an id not
+ * seen yet reads both lists again. Saves two statements on every coupon page.
+ */
+const referenceCodes = new WeakMap<Knex, ReferenceCodes>();
+
+async function referenceCodesFor(db: Knex, rows: SpecimenRow[]): Promise<ReferenceCodes> {
+  const known = referenceCodes.get(db);
+  if (known && rows.every((r) => known.testMethods.has(r.test_method_id) && known.conditions.has(r.condition_id))) return known;
+  const [methods, conditions] = await Promise.all([testMethodIndex(db), conditionIndex(db)]);
+  const fresh = {
     testMethods: new Map([...methods.byId].map(([id, m]) => [id, m.code])),
     conditions: new Map([...conditions.byId].map(([id, c]) => [id, c.code])),
   };
+  referenceCodes.set(db, fresh);
+  return fresh;
+}
+
+async function labelsFor(db: Knex, rows: SpecimenRow[]): Promise<CatalogueLabels> {
+  const [catalogue, codes] = await Promise.all([
+    catalogueLabels(db, { batchIds: rows.map((r) => r.batch_id), panelIds: rows.flatMap((r) => (r.panel_id === null ? [] : [r.panel_id])) }),
+    referenceCodesFor(db, rows),
+  ]);
+  return { ...catalogue, ...codes };
 }
 
 async function describeSpecimens(db: Knex, rows: SpecimenRow[]) {
