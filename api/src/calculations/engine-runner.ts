@@ -48,17 +48,21 @@ function isLight(task: EngineTaskName, input: unknown): boolean {
   return false; // envelopes, polar sweeps and plate checks are many analyses in one
 }
 
+/** The process's pool, started on first use. */
+function enginePool(): EnginePool {
+  pool ??= createEnginePool({ threads });
+  return pool;
+}
+
 export async function runEngine<T = unknown>(task: EngineTaskName, input: unknown): Promise<T> {
   if (threads === 0 || isLight(task, input)) return engineTasks[task](input) as T;
-  pool ??= createEnginePool({ threads });
-  return pool.run<T>(task, input);
+  return enginePool().run<T>(task, input);
 }
 
 /** The same, as the JSON text of the reply: routes that only pass the result on send it with sendJsonText. */
 export async function runEngineJson(task: EngineTaskName, input: unknown): Promise<string> {
   if (threads === 0 || isLight(task, input)) return JSON.stringify(engineTasks[task](input));
-  pool ??= createEnginePool({ threads });
-  return pool.runJson(task, input);
+  return enginePool().runJson(task, input);
 }
 
 /** Sends JSON text as res.json would send the value. */

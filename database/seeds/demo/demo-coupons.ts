@@ -8,18 +8,8 @@
  */
 import { TEMPLATE_FIELDS, templateHeader } from '../../../api/src/coupons/csv-template.ts';
 import { csvCell } from '../../../api/src/shared/csv-cell.ts';
+import { mulberry32 } from '../../../api/src/shared/seeded-random.ts';
 import { CONDITION_FACTOR, DEMO_CONDITIONS, DEMO_LABORATORY, DEMO_MATERIALS, DEMO_PROGRAMME, type DemoProgramme } from './demo-scenario.ts';
-
-function mulberry32(seed: number) {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 function normalDeviates(uniform: () => number) {
   return () => {

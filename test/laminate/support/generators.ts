@@ -1,17 +1,9 @@
 /** Seeded random laminates for the identity tests (the same stacks on every run). */
 import type { PlyInput, PlyMaterial } from '../../../api/src/laminate/index.ts';
+import { mulberry32 } from '../../../api/src/shared/seeded-random.ts';
 
-/** mulberry32: a small seeded generator (common practice for reproducible tests). */
-export function seededRandom(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+/** mulberry32 (api/src/shared/seeded-random.ts): the same stacks on every run. */
+export const seededRandom = mulberry32;
 
 /** T300/5208 graphite/epoxy (Tsai and Hahn 1980 data as used by Kaw, Table 2.1; from memory), MPa. */
 export const T300_5208: PlyMaterial = {

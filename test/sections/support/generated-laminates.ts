@@ -6,18 +6,10 @@
  * strengths, expansion coefficients and transverse shear moduli, some without.
  */
 import type { PlyInput, PlyMaterial } from '../../../api/src/laminate/types.ts';
+import { mulberry32 } from '../../../api/src/shared/seeded-random.ts';
 
-/** mulberry32: a small seeded generator (public-domain algorithm), so failures are reproducible. */
-export function seededRandom(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+/** mulberry32 (api/src/shared/seeded-random.ts), so failures are reproducible. */
+export const seededRandom = mulberry32;
 
 export interface GeneratedLaminate {
   kind: 'symmetric' | 'unsymmetric' | 'sandwich';
